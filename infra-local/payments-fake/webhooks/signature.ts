@@ -1,0 +1,11 @@
+import { createHmac } from 'node:crypto';
+
+/**
+ * Stripe's webhook signature: `t=<unix seconds>,v1=<hex HMAC-SHA256 of "<t>.<payload>">`,
+ * keyed with the whole endpoint secret (including the `whsec_` prefix), which is what
+ * `stripe.webhooks.constructEvent` verifies.
+ */
+export function signatureHeader(payload: string, secret: string, timestamp: number): string {
+  const signature = createHmac('sha256', secret).update(`${timestamp}.${payload}`, 'utf8').digest('hex');
+  return `t=${timestamp},v1=${signature}`;
+}

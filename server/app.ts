@@ -1,0 +1,129 @@
+import 'reflect-metadata';
+import express, { type Express, type Router } from 'express';
+import helmet from 'helmet';
+import { createPool } from 'mysql2';
+import { pinoHttp } from 'pino-http';
+import type { AppContext } from './app-context';
+import type { Config } from './config';
+import { createDataSource } from './db/data-source';
+import { accountRouter } from './features/account/account.router';
+import { adminRouter } from './features/admin/admin.router';
+import { auditRouter } from './features/audit/audit.router';
+import { authRouter } from './features/auth/auth.router';
+import { createPassport } from './features/auth/passport';
+import { RateLimits } from './features/auth/rate-limits';
+import { createSessionMiddleware, sessionTimeouts } from './features/auth/session';
+import { healthRouter } from './features/health/health.router';
+import { MailDispatcher } from './features/mail/mail-dispatcher';
+import { csrf, sameOriginOnly } from './http/middlewares/csrf';
+import { apiNotFound, errorHandler } from './http/middlewares/error-handler';
+import { staticClient } from './http/static-client';
+import { createLogger } from './lib/logger';
+import { createMailTransport } from './lib/mail-transport';
+import { createPayments } from './lib/payments';
+import { createStorage } from './lib/storage';
+
+/** A router and where it is mounted under /api; listed so tests can walk every route. */
+export type ApiMount = [path: string, router: Router];
+
+export interface AppInstance {
+  app: Express;
+  apiMounts: readonly ApiMount[];
+  ctx: AppContext;
+  /** Start background work (the mail dispatcher). */
+  start(): void;
+  /** Refuse new work in health checks while shutting down. */
+  beginShutdown(): void;
+  /** Release every resource; the process can then exit. */
+  close(): Promise<void>;
+}
+
+/** Build the Express app and the resources it needs. Never listens: index.ts and tests do. */
+export async function createApp(config: Config): Promise<AppInstance> {
+  const logger = createLogger(config);
+  const dataSource = createDataSource(config.db);
+  await dataSource.initialize();
+  const pool = createPool({ ...config.db, connectionLimit: 5, connectTimeout: 5000 });
+  const mailTransport = createMailTransport(config.mail);
+  const mailDispatcher = new MailDispatcher(dataSource, mailTransport, config.mail.from, logger);
+  const ctx: AppContext = {
+    config,
+    logger,
+    dataSource,
+    rateLimits: new RateLimits(pool, config),
+    mailTransport,
+    mailDispatcher,
+    storage: createStorage(config.s3),
+    payments: createPayments(config.stripe),
+    async transaction(work) {
+      const result = await dataSource.transaction(work);
+      mailDispatcher.nudge();
+      return result;
+    },
+  };
+  const sessions = createSessionMiddleware(config, pool);
+  const passport = createPassport(ctx);
+  let shuttingDown = false;
+
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', config.trustProxyHops);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'default-src': ["'self'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'script-src': ["'self'"],
+          'connect-src': ["'self'"],
+          'frame-ancestors': ["'none'"],
+          'form-action': ["'self'"],
+          'upgrade-insecure-requests': config.session.cookieSecure ? [] : null,
+        },
+      },
+      strictTransportSecurity: config.session.cookieSecure,
+    }),
+  );
+  app.use(pinoHttp({ logger, customProps: (req) => ({ userId: (req as express.Request).user?.id }) }));
+
+  const api = express.Router();
+  const health = healthRouter(ctx, () => shuttingDown);
+  api.use('/health', health); // before sessions: probes must not create them
+  api.use(express.json({ limit: '100kb', strict: true }));
+  api.use(sessions.middleware, sessionTimeouts(config), passport.initialize(), passport.session());
+  api.use(sameOriginOnly(config.appOrigin), csrf.csrfSynchronisedProtection);
+  const mounts: ApiMount[] = [
+    ['/health', health],
+    ['/auth', authRouter(ctx, passport)],
+    ['/account', accountRouter(ctx)],
+    ['/admin', adminRouter(ctx)],
+    ['/audit-events', auditRouter(ctx)],
+  ];
+  for (const [path, router] of mounts.slice(1)) api.use(path, router);
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  const client = staticClient(config.clientDist);
+  if (client) app.use(client);
+  app.use(apiNotFound);
+  app.use(errorHandler);
+
+  return {
+    app,
+    apiMounts: mounts,
+    ctx,
+    start: () => mailDispatcher.start(),
+    beginShutdown: () => {
+      shuttingDown = true;
+    },
+    async close() {
+      await mailDispatcher.stop();
+      await sessions.close().catch(() => undefined);
+      await new Promise<void>((resolve) => pool.end(() => resolve()));
+      mailTransport.close();
+      ctx.storage.destroy();
+      await dataSource.destroy();
+    },
+  };
+}

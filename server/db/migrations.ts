@@ -1,0 +1,4 @@
+import { Foundation1764626400000 } from './migrations/1764626400000-foundation';
+
+/** Every migration in order; listed explicitly so they run the same under tsx, Vitest and a build. */
+export const migrations = [Foundation1764626400000];

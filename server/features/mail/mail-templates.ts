@@ -1,0 +1,70 @@
+/** The text of every e-mail Benchwright sends. Each has a plain-text and an HTML part. */
+export interface EmailContent {
+  subject: string;
+  text: string;
+  html: string;
+}
+
+const escapeHtml = (value: string) =>
+  value.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+
+/** A subject is one line: any line break (header injection) becomes a space. */
+const oneLine = (value: string) => value.replace(/[\r\n]+/g, ' ').trim();
+
+function compose(subject: string, greetingName: string, paragraphs: string[], link?: { url: string; label: string }): EmailContent {
+  const text = [
+    `Hello ${oneLine(greetingName)},`,
+    '',
+    ...paragraphs.flatMap((p) => [p, '']),
+    ...(link ? [`${link.label}: ${link.url}`, ''] : []),
+    '— Benchwright',
+  ].join('\n');
+  const html = [
+    '<div style="font-family: sans-serif; line-height: 1.5; color: #1c2620">',
+    `<p>Hello ${escapeHtml(oneLine(greetingName))},</p>`,
+    ...paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`),
+    link ? `<p><a href="${escapeHtml(link.url)}">${escapeHtml(link.label)}</a></p>` : '',
+    '<p>— Benchwright</p>',
+    '</div>',
+  ].join('\n');
+  return { subject: oneLine(subject), text, html };
+}
+
+export const mailTemplates = {
+  verifyEmail: (name: string, url: string) =>
+    compose('Confirm your e-mail address for Benchwright', name, [
+      'Thanks for joining Benchwright. Open the link below to confirm this address; then you can sign in.',
+      'The link works once and expires in 48 hours. If you did not ask to join, ignore this message.',
+    ], { url, label: 'Confirm my address' }),
+
+  alreadyRegistered: (name: string, signInUrl: string, resetUrl: string) =>
+    compose('Someone tried to join Benchwright with your address', name, [
+      'Somebody — perhaps you — tried to open a new Benchwright account with this e-mail address, which already has an account.',
+      `If it was you, sign in at ${signInUrl}. If you have forgotten your password, reset it at ${resetUrl}.`,
+      'If it was not you, you can ignore this message; nothing has changed.',
+    ]),
+
+  passwordReset: (name: string, url: string) =>
+    compose('Reset your Benchwright password', name, [
+      'We received a request to reset the password of your Benchwright account.',
+      'The link works once and expires in one hour. If you did not ask for it, ignore this message: your password stays as it is.',
+    ], { url, label: 'Choose a new password' }),
+
+  passwordChanged: (name: string) =>
+    compose('Your Benchwright password was changed', name, [
+      'The password of your Benchwright account was just changed, and every other signed-in session was ended.',
+      'If you did not do this, reset your password straight away and tell us.',
+    ]),
+
+  confirmNewEmail: (name: string, url: string) =>
+    compose('Confirm your new e-mail address for Benchwright', name, [
+      'You asked to use this address for your Benchwright account. Open the link to confirm it.',
+      'The link works once and expires in 24 hours. Until then your old address stays in use.',
+    ], { url, label: 'Use this address' }),
+
+  emailChanged: (name: string, newEmail: string) =>
+    compose('Your Benchwright e-mail address was changed', name, [
+      `Your Benchwright account now uses ${oneLine(newEmail)}. Messages will go there from now on.`,
+      'If you did not do this, reply to this message or reset your password straight away.',
+    ]),
+};

@@ -1,0 +1,19 @@
+import type { User as UserEntity } from './features/users/user.entity';
+
+declare global {
+  namespace Express {
+    /** The signed-in account, as passport puts it on `req.user`. */
+    interface User extends UserEntity {}
+  }
+}
+
+declare module 'express-session' {
+  interface SessionData {
+    /** When this session signed in (ms), for the absolute time-out. */
+    signedInAt?: number;
+    /** Last request (ms), for the idle time-out. */
+    lastSeenAt?: number;
+  }
+}
+
+export {};
