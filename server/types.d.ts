@@ -3,6 +3,7 @@ import type { User as UserEntity } from './features/users/user.entity';
 declare global {
   namespace Express {
     /** The signed-in account, as passport puts it on `req.user`. */
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type -- merges the entity into passport's type
     interface User extends UserEntity {}
   }
 }

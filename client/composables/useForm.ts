@@ -84,8 +84,10 @@ export function useForm<TValues extends Record<string, string>, TOutput>(
 
   async function focusFirstError(): Promise<void> {
     await nextTick();
-    const first = Object.keys(initial).find((name) => errors[name]);
-    if (first) document.getElementById(fieldId(first))?.focus();
+    for (const name of Object.keys(initial)) {
+      const input = errors[name] ? document.getElementById(fieldId(name)) : null;
+      if (input) return input.focus();
+    }
   }
 
   /** Put the server's per-field messages next to their fields; true when any matched a field. */

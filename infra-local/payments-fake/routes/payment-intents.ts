@@ -172,7 +172,8 @@ function update(ctx: ApiContext): PaymentIntent {
   const transferGroup = p.nullableString('transfer_group');
   const receiptEmail = p.nullableString('receipt_email');
   const paymentMethodId = p.nullableString('payment_method');
-  const paymentMethod = paymentMethodId ? resolvePaymentMethod(ctx, paymentMethodId) : paymentMethodId;
+  const paymentMethod =
+    paymentMethodId === undefined || paymentMethodId === null ? paymentMethodId : resolvePaymentMethod(ctx, paymentMethodId);
 
   intent.amount = amount;
   intent.currency = currency;

@@ -31,6 +31,6 @@ export class AuditEvent {
   ip: string | null;
 
   @Index('ix_audit_events_created_at')
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3 })
+  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
   createdAt: Date;
 }

@@ -34,6 +34,6 @@ export class OneTimeToken {
   @Column({ name: 'used_at', type: 'datetime', precision: 3, nullable: true })
   usedAt: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3 })
+  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
   createdAt: Date;
 }

@@ -41,6 +41,6 @@ export class OutboundEmail {
   @Column({ name: 'sent_at', type: 'datetime', precision: 3, nullable: true })
   sentAt: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3 })
+  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
   createdAt: Date;
 }

@@ -1,0 +1,99 @@
+import type { Router } from 'express';
+import request from 'supertest';
+import type TestAgent from 'supertest/lib/agent';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { AppInstance } from '../../server/app';
+import { buildUser, GOOD_PASSWORD } from '../support/factories';
+import { browserLikeAgent, startTestApp, useToken } from '../support/test-app';
+
+/**
+ * Who may call each API route (OWASP ASVS 5.0 V8.2.1: function-level access control on every
+ * route). The routes are read from the app's own routers, so a route added without a line here
+ * fails the first test.
+ */
+type Access = 'anyone' | 'member' | 'moderator' | 'admin';
+const EXPECTED: Record<string, Access> = {
+  'GET /api/health': 'anyone',
+  'GET /api/auth/session': 'anyone',
+  'POST /api/auth/sign-up': 'anyone',
+  'POST /api/auth/verify-email': 'anyone',
+  'POST /api/auth/resend-verification': 'anyone',
+  'POST /api/auth/sign-in': 'anyone',
+  'POST /api/auth/sign-out': 'anyone',
+  'POST /api/auth/password-reset/request': 'anyone',
+  'POST /api/auth/password-reset/confirm': 'anyone',
+  'POST /api/account/email/confirm': 'anyone',
+  'GET /api/account': 'member',
+  'PATCH /api/account/profile': 'member',
+  'POST /api/account/password': 'member',
+  'POST /api/account/email': 'member',
+  'GET /api/admin/users': 'admin',
+  'PATCH /api/admin/users/:id/role': 'admin',
+  'POST /api/admin/users/:id/suspension': 'admin',
+  'DELETE /api/admin/users/:id/suspension': 'admin',
+  'GET /api/audit-events': 'moderator',
+};
+
+type Persona = 'visitor' | 'member' | 'builder' | 'moderator' | 'admin' | 'suspended';
+const RANK: Record<Exclude<Persona, 'suspended'>, number> = { visitor: 0, member: 1, builder: 1, moderator: 2, admin: 3 };
+const NEEDED: Record<Access, number> = { anyone: 0, member: 1, moderator: 2, admin: 3 };
+
+interface RouteLayer {
+  route?: { path: string; methods: Record<string, boolean> };
+}
+
+function routesOf(instance: AppInstance): string[] {
+  return instance.apiMounts.flatMap(([mount, router]: [string, Router]) =>
+    (router.stack as RouteLayer[])
+      .filter((layer) => layer.route)
+      .flatMap((layer) =>
+        Object.keys(layer.route!.methods).map((m) => `${m.toUpperCase()} /api${mount}${layer.route!.path === '/' ? '' : layer.route!.path}`),
+      ),
+  );
+}
+
+let app: AppInstance;
+const agents = new Map<Persona, TestAgent>();
+
+beforeAll(async () => {
+  app = await startTestApp();
+  for (const persona of ['member', 'builder', 'moderator', 'admin', 'suspended'] as const) {
+    const role = persona === 'suspended' ? 'member' : persona;
+    const user = await buildUser(app.ctx.dataSource, { role });
+    const agent = await browserLikeAgent(app);
+    useToken(agent, (await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(200)).body);
+    if (persona === 'suspended') await app.ctx.dataSource.query('UPDATE users SET suspended_at = NOW(3), suspended_reason = ? WHERE id = ?', ['matrix check', user.id]);
+    agents.set(persona, agent);
+  }
+  agents.set('visitor', await browserLikeAgent(app));
+});
+afterAll(() => app.close());
+
+describe('role × route matrix', () => {
+  it('lists every API route the app serves, and nothing more', () => {
+    expect(routesOf(app).sort()).toEqual(Object.keys(EXPECTED).sort());
+  });
+
+  const personas: Persona[] = ['visitor', 'member', 'builder', 'moderator', 'admin', 'suspended'];
+  // Sign-out last, so it does not end the personas' sessions before the other routes are tried.
+  const ordered = Object.entries(EXPECTED).sort(([a], [b]) => Number(a.endsWith('sign-out')) - Number(b.endsWith('sign-out')));
+
+  for (const persona of personas) {
+    it(`lets a ${persona} through exactly the routes their role allows`, async () => {
+      const agent = agents.get(persona)!;
+      const rank = persona === 'suspended' ? 0 : RANK[persona];
+      const outcomes: Record<string, number> = {};
+      for (const [route, access] of ordered) {
+        const [method, path] = route.split(' ') as [string, string];
+        const url = path.replace(':id', '999999999');
+        const res = await (agent as unknown as Record<string, (u: string) => request.Test>)[method.toLowerCase()]!(url).send({});
+        const allowed = rank >= NEEDED[access];
+        outcomes[route] = res.status;
+        if (allowed) expect([401, 403], `${persona} ${route}`).not.toContain(res.status);
+        else expect(res.status, `${persona} ${route}`).toBe(rank === 0 ? 401 : 403);
+        expect(res.status, `${persona} ${route}`).toBeLessThan(500);
+      }
+      expect(Object.keys(outcomes)).toHaveLength(Object.keys(EXPECTED).length);
+    });
+  }
+});
