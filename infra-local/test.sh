@@ -24,7 +24,7 @@ if [ ! -x /usr/bin/chromium ]; then
   apt-get update
   DEBIAN_FRONTEND=noninteractive apt-get install -y chromium
 fi
-/usr/bin/chromium --version
+/usr/bin/chromium --version 2>/dev/null # its wrapper script warns on stderr
 
 RECORD=$(mktemp "${TMPDIR:-/tmp}/benchwright-test.XXXXXX")
 cleanup() {

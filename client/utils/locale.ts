@@ -13,6 +13,7 @@ export const elementLocale: Language = {
     ...en.el,
     pagination: { ...en.el.pagination, total: '{total} in all', pagesize: ' per page' },
     drawer: { close: 'Close the menu' },
+    tag: { close: 'Remove this filter' },
   },
 };
 
