@@ -30,6 +30,7 @@ export default defineConfig({
     }),
   ],
   resolve: { alias },
+  publicDir: 'client/public',
   build: {
     outDir: 'dist/client',
     emptyOutDir: true,

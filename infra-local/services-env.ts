@@ -52,8 +52,12 @@ export function writeServicesEnv(profile: Profile, secrets: LocalSecrets): strin
   const env = servicesEnv(profile, secrets);
   mkdirSync(path.dirname(file), { recursive: true });
   const lines = SERVICES_ENV_KEYS.map((key) => `${key}=${env[key]}`);
-  writeFileSync(file, `# Written by infra-local/services.ts up --profile ${profile}; do not edit.\n${lines.join('\n')}\n`, {
-    mode: 0o600,
-  });
+  writeFileSync(
+    file,
+    `# Written by infra-local/services.ts up --profile ${profile}; do not edit.\n${lines.join('\n')}\n`,
+    {
+      mode: 0o600,
+    },
+  );
   return file;
 }

@@ -64,7 +64,9 @@ async function down(profile: Profile, names: readonly ServiceName[]): Promise<vo
 
 function namesFrom(file: string): ServiceName[] {
   if (!existsSync(file)) return [];
-  const lines = readFileSync(file, 'utf8').split('\n').map((line) => line.trim());
+  const lines = readFileSync(file, 'utf8')
+    .split('\n')
+    .map((line) => line.trim());
   return [...new Set(lines.filter(isServiceName))];
 }
 

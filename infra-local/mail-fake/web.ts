@@ -7,7 +7,13 @@ import type { MailStore } from './store';
 const PAGE_CSP =
   "default-src 'none'; style-src 'unsafe-inline'; img-src data:; frame-src 'self'; base-uri 'none'; form-action 'none'; frame-ancestors 'none'";
 
-function send(res: http.ServerResponse, status: number, type: string, body: string, extra: http.OutgoingHttpHeaders = {}) {
+function send(
+  res: http.ServerResponse,
+  status: number,
+  type: string,
+  body: string,
+  extra: http.OutgoingHttpHeaders = {},
+) {
   res.writeHead(status, {
     'content-type': `${type}; charset=utf-8`,
     'cache-control': 'no-store',
