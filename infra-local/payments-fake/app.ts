@@ -26,7 +26,10 @@ const bodyErrors: ErrorRequestHandler = (error: unknown, _req, res, next) => {
       : 500;
   const message = error instanceof Error ? error.message : String(error);
   sendJson(res, status >= 400 && status < 500 ? status : 500, {
-    error: { type: status < 500 ? 'invalid_request_error' : 'api_error', message: `Could not read the request: ${message}` },
+    error: {
+      type: status < 500 ? 'invalid_request_error' : 'api_error',
+      message: `Could not read the request: ${message}`,
+    },
   });
 };
 
@@ -40,7 +43,9 @@ export function buildApp(runtime: Runtime): Express {
   if (runtime.log !== noLog) {
     app.use((req, res, next) => {
       const started = Date.now();
-      res.on('finish', () => runtime.log(`${req.method} ${req.originalUrl} ${res.statusCode} ${Date.now() - started}ms`));
+      res.on('finish', () =>
+        runtime.log(`${req.method} ${req.originalUrl} ${res.statusCode} ${Date.now() - started}ms`),
+      );
       next();
     });
   }

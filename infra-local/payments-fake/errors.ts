@@ -1,10 +1,6 @@
 import type { PaymentError, PaymentIntent, PaymentMethod } from './types';
 
-export type StripeErrorType =
-  | 'api_error'
-  | 'card_error'
-  | 'idempotency_error'
-  | 'invalid_request_error';
+export type StripeErrorType = 'api_error' | 'card_error' | 'idempotency_error' | 'invalid_request_error';
 
 /** The body Stripe returns under `error`. */
 export interface StripeErrorBody {

@@ -254,14 +254,7 @@ export interface Balance {
 }
 
 /** Any object the fake can put into an event or expand by id. */
-export type StripeObject =
-  | PaymentIntent
-  | Charge
-  | Refund
-  | PaymentMethod
-  | Account
-  | Transfer
-  | TransferReversal;
+export type StripeObject = PaymentIntent | Charge | Refund | PaymentMethod | Account | Transfer | TransferReversal;
 
 export interface StripeEvent {
   id: string;

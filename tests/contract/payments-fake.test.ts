@@ -3,7 +3,7 @@
  * (infra-local/payments-fake). Each test proves one behaviour the app relies on,
  * through the same client calls the app makes.
  */
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
@@ -147,7 +147,10 @@ describe('the payments fake, driven by the official stripe SDK', () => {
   describe('payments', () => {
     it('takes a Visa payment, creates a succeeded charge and adds the amount to the balance', async () => {
       const before = await availableGbp();
-      const intent = await pay('pm_card_visa', 2500, { transfer_group: 'order_visa', description: 'Module: Hogwood Junction' });
+      const intent = await pay('pm_card_visa', 2500, {
+        transfer_group: 'order_visa',
+        description: 'Module: Hogwood Junction',
+      });
 
       expect(intent.id).toMatch(/^pi_/);
       expect(intent.object).toBe('payment_intent');
@@ -250,7 +253,11 @@ describe('the payments fake, driven by the official stripe SDK', () => {
     });
 
     it('cancels an unpaid intent and then refuses to confirm it', async () => {
-      const intent = await stripe.paymentIntents.create({ amount: 900, currency: 'gbp', automatic_payment_methods: NO_REDIRECTS });
+      const intent = await stripe.paymentIntents.create({
+        amount: 900,
+        currency: 'gbp',
+        automatic_payment_methods: NO_REDIRECTS,
+      });
       const canceled = await stripe.paymentIntents.cancel(intent.id, { cancellation_reason: 'abandoned' });
       expect(canceled.status).toBe('canceled');
       expect(canceled.cancellation_reason).toBe('abandoned');
@@ -271,7 +278,11 @@ describe('the payments fake, driven by the official stripe SDK', () => {
       expect(unknownMethod.param).toBe('payment_method');
 
       const unknownParam = await rejection(
-        stripe.paymentIntents.create({ amount: 1000, currency: 'gbp', colour: 'green' } as Stripe.PaymentIntentCreateParams),
+        stripe.paymentIntents.create({
+          amount: 1000,
+          currency: 'gbp',
+          colour: 'green',
+        } as Stripe.PaymentIntentCreateParams),
       );
       expect(unknownParam.code).toBe('parameter_unknown');
       expect(unknownParam.param).toBe('colour');
@@ -350,7 +361,11 @@ describe('the payments fake, driven by the official stripe SDK', () => {
       const intent = await pay('pm_card_visa', 5000);
       const before = await availableGbp();
 
-      const partial = await stripe.refunds.create({ payment_intent: intent.id, amount: 2000, reason: 'requested_by_customer' });
+      const partial = await stripe.refunds.create({
+        payment_intent: intent.id,
+        amount: 2000,
+        reason: 'requested_by_customer',
+      });
       expect(partial).toMatchObject({ object: 'refund', amount: 2000, status: 'succeeded', payment_intent: intent.id });
       let charge = await stripe.charges.retrieve(intent.latest_charge as string);
       expect(charge.amount_refunded).toBe(2000);
@@ -431,19 +446,29 @@ describe('the payments fake, driven by the official stripe SDK', () => {
       expect(transfer.id).toMatch(/^tr_/);
       expect((await stripe.transfers.retrieve(transfer.id)).amount_reversed).toBe(0);
 
-      const pending = await stripe.accounts.create({ type: 'express', country: 'GB', capabilities: { transfers: { requested: true } } });
-      const refused = await rejection(stripe.transfers.create({ amount: 100, currency: 'gbp', destination: pending.id }));
+      const pending = await stripe.accounts.create({
+        type: 'express',
+        country: 'GB',
+        capabilities: { transfers: { requested: true } },
+      });
+      const refused = await rejection(
+        stripe.transfers.create({ amount: 100, currency: 'gbp', destination: pending.id }),
+      );
       expect(refused).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
       expect(refused.param).toBe('destination');
 
-      const unknown = await rejection(stripe.transfers.create({ amount: 100, currency: 'gbp', destination: 'acct_nobody' }));
+      const unknown = await rejection(
+        stripe.transfers.create({ amount: 100, currency: 'gbp', destination: 'acct_nobody' }),
+      );
       expect(unknown.code).toBe('resource_missing');
     });
 
     it('refuses a transfer the platform balance cannot cover', async () => {
       const seller = await onboardedAccount();
       const tooMuch = (await availableGbp()) + 1;
-      const error = await rejection(stripe.transfers.create({ amount: tooMuch, currency: 'gbp', destination: seller.id }));
+      const error = await rejection(
+        stripe.transfers.create({ amount: tooMuch, currency: 'gbp', destination: seller.id }),
+      );
       expect(error.code).toBe('balance_insufficient');
     });
 
@@ -596,11 +621,19 @@ describe('the payments fake, driven by the official stripe SDK', () => {
         const client = clientFor(first.port);
         intentId = (
           await client.paymentIntents.create(
-            { amount: 2200, currency: 'gbp', payment_method: 'pm_card_visa', confirm: true, automatic_payment_methods: NO_REDIRECTS },
+            {
+              amount: 2200,
+              currency: 'gbp',
+              payment_method: 'pm_card_visa',
+              confirm: true,
+              automatic_payment_methods: NO_REDIRECTS,
+            },
             { idempotencyKey: key },
           )
         ).id;
         accountId = (await client.accounts.create({ type: 'express', country: 'GB' })).id;
+        // Written after each change, not only on close: a crash loses nothing.
+        expect(readFileSync(stateFile, 'utf8')).toContain(accountId);
       } finally {
         await first.close();
       }
@@ -616,7 +649,13 @@ describe('the payments fake, driven by the official stripe SDK', () => {
         expect(balance.available.find((entry) => entry.currency === 'gbp')?.amount).toBe(2200);
 
         const replay = await client.paymentIntents.create(
-          { amount: 2200, currency: 'gbp', payment_method: 'pm_card_visa', confirm: true, automatic_payment_methods: NO_REDIRECTS },
+          {
+            amount: 2200,
+            currency: 'gbp',
+            payment_method: 'pm_card_visa',
+            confirm: true,
+            automatic_payment_methods: NO_REDIRECTS,
+          },
           { idempotencyKey: key },
         );
         expect(replay.id).toBe(intentId);

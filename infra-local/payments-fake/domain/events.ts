@@ -2,6 +2,9 @@ import { newId } from '../ids';
 import { webhookTargetsFor, type Runtime } from '../runtime';
 import type { StripeEvent, StripeObject } from '../types';
 
+/** Events kept (oldest dropped first), so a long-running dev fake keeps a small state file. */
+export const MAX_EVENTS = 5000;
+
 export interface EventRequest {
   id: string | null;
   idempotency_key: string | null;
@@ -29,7 +32,10 @@ export function recordEvent(
     request,
     type,
   };
-  runtime.store.state.events[event.id] = event;
+  const events = runtime.store.state.events;
+  events[event.id] = event;
+  const ids = Object.keys(events);
+  for (const oldId of ids.slice(0, Math.max(0, ids.length - MAX_EVENTS))) delete events[oldId];
   return event;
 }
 
@@ -40,6 +46,11 @@ export function deliverEvent(runtime: Runtime, event: StripeEvent): void {
 /** Stripe's `type` filter on GET /v1/events accepts a `*` wildcard, e.g. `payment_intent.*`. */
 export function eventTypeMatches(pattern: string, type: string): boolean {
   if (!pattern.includes('*')) return pattern === type;
-  const regex = new RegExp(`^${pattern.split('*').map((part) => part.replace(/[.+?^${}()|[\]\\]/g, '\\$&')).join('.*')}$`);
+  const regex = new RegExp(
+    `^${pattern
+      .split('*')
+      .map((part) => part.replace(/[.+?^${}()|[\]\\]/g, '\\$&'))
+      .join('.*')}$`,
+  );
   return regex.test(type);
 }

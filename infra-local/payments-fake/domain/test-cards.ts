@@ -3,9 +3,7 @@
  * understands. Passing one of these ids creates a new `pm_…` PaymentMethod, as Stripe does.
  */
 export type CardOutcome =
-  | { kind: 'succeed' }
-  | { kind: 'decline'; declineCode: string; message: string }
-  | { kind: 'authenticate' };
+  { kind: 'succeed' } | { kind: 'decline'; declineCode: string; message: string } | { kind: 'authenticate' };
 
 export interface TestCard {
   brand: string;
@@ -17,7 +15,13 @@ export interface TestCard {
 
 export const TEST_CARDS: Readonly<Record<string, TestCard>> = {
   pm_card_visa: { brand: 'visa', last4: '4242', funding: 'credit', country: 'US', outcome: { kind: 'succeed' } },
-  pm_card_mastercard: { brand: 'mastercard', last4: '4444', funding: 'credit', country: 'US', outcome: { kind: 'succeed' } },
+  pm_card_mastercard: {
+    brand: 'mastercard',
+    last4: '4444',
+    funding: 'credit',
+    country: 'US',
+    outcome: { kind: 'succeed' },
+  },
   pm_card_chargeDeclined: {
     brand: 'visa',
     last4: '0002',

@@ -118,7 +118,9 @@ export function apiRoute(runtime: Runtime, handler: ApiHandler, options: RouteOp
         status = error.status;
         body = { error: error.body };
       } else {
-        runtime.log(`internal error on ${method} ${url}: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`);
+        runtime.log(
+          `internal error on ${method} ${url}: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`,
+        );
         status = 500;
         body = { error: { type: 'api_error', message: 'An unexpected error occurred in the payments fake.' } };
       }

@@ -29,15 +29,25 @@ export function requireTestKey(): RequestHandler {
     const key = keyFrom(req.get('Authorization'));
     let error: StripeApiError | null = null;
     if (key === null) error = unauthenticated(NO_KEY_MESSAGE);
-    else if (/^(sk|rk)_live_/.test(key)) error = unauthenticated(`The payments fake accepts only test-mode keys; got a live key ${masked(key)}.`);
-    else if (!/^(sk|rk)_test_[A-Za-z0-9_]+$/.test(key)) error = unauthenticated(`Invalid API Key provided: ${masked(key)}`);
+    else if (/^(sk|rk)_live_/.test(key))
+      error = unauthenticated(`The payments fake accepts only test-mode keys; got a live key ${masked(key)}.`);
+    else if (!/^(sk|rk)_test_[A-Za-z0-9_]+$/.test(key))
+      error = unauthenticated(`Invalid API Key provided: ${masked(key)}`);
     else if (req.get('Stripe-Account')) {
-      error = invalidRequest('The Stripe-Account header (acting as a connected account) is not modelled by the payments fake.', {
-        param: 'Stripe-Account',
-      });
+      error = invalidRequest(
+        'The Stripe-Account header (acting as a connected account) is not modelled by the payments fake.',
+        {
+          param: 'Stripe-Account',
+        },
+      );
     }
     if (error) {
-      sendJson(res, error.status, { error: error.body }, error.status === 401 ? { 'WWW-Authenticate': 'Bearer realm="Stripe"' } : {});
+      sendJson(
+        res,
+        error.status,
+        { error: error.body },
+        error.status === 401 ? { 'WWW-Authenticate': 'Bearer realm="Stripe"' } : {},
+      );
       return;
     }
     next();

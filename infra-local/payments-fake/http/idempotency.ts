@@ -4,6 +4,8 @@ import type { IdempotencyRecord, Store } from '../store';
 
 /** Stripe keeps idempotency keys for at least 24 hours. */
 const KEY_LIFETIME_SECONDS = 24 * 60 * 60;
+/** The SDK sends a key with every POST; keep the newest ones only, so the state file stays small. */
+const MAX_KEYS = 2000;
 
 function stable(value: unknown): unknown {
   if (Array.isArray(value)) return value.map(stable);
@@ -19,13 +21,13 @@ function stable(value: unknown): unknown {
 
 /** A hash of the parameters that ignores key order. */
 export function fingerprint(params: unknown): string {
-  return createHash('sha256').update(JSON.stringify(stable(params ?? {}))).digest('hex');
+  return createHash('sha256')
+    .update(JSON.stringify(stable(params ?? {})))
+    .digest('hex');
 }
 
 export type IdempotencyOutcome =
-  | { kind: 'new' }
-  | { kind: 'replay'; record: IdempotencyRecord }
-  | { kind: 'conflict'; error: StripeApiError };
+  { kind: 'new' } | { kind: 'replay'; record: IdempotencyRecord } | { kind: 'conflict'; error: StripeApiError };
 
 export function checkIdempotencyKey(
   store: Store,
@@ -36,7 +38,10 @@ export function checkIdempotencyKey(
   now: number,
 ): IdempotencyOutcome {
   if (key.length > 255) {
-    return { kind: 'conflict', error: invalidRequest('Idempotency-Key must be at most 255 characters.', { param: 'Idempotency-Key' }) };
+    return {
+      kind: 'conflict',
+      error: invalidRequest('Idempotency-Key must be at most 255 characters.', { param: 'Idempotency-Key' }),
+    };
   }
   const record = store.state.idempotency[key];
   if (!record || record.createdAt + KEY_LIFETIME_SECONDS < now) return { kind: 'new' };
@@ -64,4 +69,6 @@ export function rememberIdempotentResult(store: Store, key: string, record: Idem
     if (old.createdAt + KEY_LIFETIME_SECONDS < now) delete store.state.idempotency[oldKey];
   }
   store.state.idempotency[key] = record;
+  const keys = Object.keys(store.state.idempotency);
+  for (const oldKey of keys.slice(0, Math.max(0, keys.length - MAX_KEYS))) delete store.state.idempotency[oldKey];
 }

@@ -14,8 +14,7 @@ function list(ctx: ApiContext): object {
   const types = p.stringArray('types');
   const events = newestFirst(ctx.store.state.events).filter(
     (event) =>
-      (type === undefined || eventTypeMatches(type, event.type)) &&
-      (types === undefined || types.includes(event.type)),
+      (type === undefined || eventTypeMatches(type, event.type)) && (types === undefined || types.includes(event.type)),
   );
   return paginate(events, p, '/v1/events', 'event');
 }

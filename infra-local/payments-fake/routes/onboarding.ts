@@ -41,7 +41,10 @@ function page(res: Response, status: number, title: string, body: string): void 
 export function onboardingRoutes(runtime: Runtime): Router {
   const router = Router();
 
-  const resolve = (req: Request, res: Response): { accountId: string; returnUrl: string; refreshUrl: string | null } | null => {
+  const resolve = (
+    req: Request,
+    res: Response,
+  ): { accountId: string; returnUrl: string; refreshUrl: string | null } | null => {
     const accountId = typeof req.params.account === 'string' ? req.params.account : '';
     const returnUrl = httpUrl(req.query.return_url);
     if (!runtime.store.state.accounts[accountId]) {

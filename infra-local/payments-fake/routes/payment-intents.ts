@@ -47,22 +47,31 @@ function create(ctx: ApiContext): PaymentIntent {
   const currency = p.currency();
   checkCurrency(currency);
   checkChargeAmount(amount, currency);
-  const captureMethod = p.oneOf('capture_method', ['automatic', 'automatic_async', 'manual'] as const) ?? 'automatic_async';
+  const captureMethod =
+    p.oneOf('capture_method', ['automatic', 'automatic_async', 'manual'] as const) ?? 'automatic_async';
   if (captureMethod === 'manual') {
-    throw invalidRequest('capture_method=manual (separate authorisation and capture) is not modelled by the payments fake.', {
-      param: 'capture_method',
-    });
+    throw invalidRequest(
+      'capture_method=manual (separate authorisation and capture) is not modelled by the payments fake.',
+      {
+        param: 'capture_method',
+      },
+    );
   }
   const apmParams = p.object('automatic_payment_methods', ['enabled', 'allow_redirects']);
   const paymentMethodTypes = p.stringArray('payment_method_types');
   if (apmParams && paymentMethodTypes) {
-    throw invalidRequest('You may only specify one of these parameters: automatic_payment_methods, payment_method_types.', {
-      code: 'parameters_exclusive',
-      param: 'automatic_payment_methods',
-    });
+    throw invalidRequest(
+      'You may only specify one of these parameters: automatic_payment_methods, payment_method_types.',
+      {
+        code: 'parameters_exclusive',
+        param: 'automatic_payment_methods',
+      },
+    );
   }
   if (paymentMethodTypes && paymentMethodTypes.some((type) => type !== 'card')) {
-    throw invalidRequest('The payments fake supports only payment_method_types[]=card.', { param: 'payment_method_types' });
+    throw invalidRequest('The payments fake supports only payment_method_types[]=card.', {
+      param: 'payment_method_types',
+    });
   }
   let automaticPaymentMethods: PaymentIntent['automatic_payment_methods'] = null;
   if (apmParams) {
@@ -173,7 +182,9 @@ function update(ctx: ApiContext): PaymentIntent {
   const receiptEmail = p.nullableString('receipt_email');
   const paymentMethodId = p.nullableString('payment_method');
   const paymentMethod =
-    paymentMethodId === undefined || paymentMethodId === null ? paymentMethodId : resolvePaymentMethod(ctx, paymentMethodId);
+    paymentMethodId === undefined || paymentMethodId === null
+      ? paymentMethodId
+      : resolvePaymentMethod(ctx, paymentMethodId);
 
   intent.amount = amount;
   intent.currency = currency;
@@ -215,7 +226,12 @@ function confirm(ctx: ApiContext): PaymentIntent {
 function cancel(ctx: ApiContext): PaymentIntent {
   const intent = findIntent(ctx);
   const p = new Params(ctx.raw, ['cancellation_reason']);
-  const reason = p.oneOf('cancellation_reason', ['duplicate', 'fraudulent', 'requested_by_customer', 'abandoned'] as const);
+  const reason = p.oneOf('cancellation_reason', [
+    'duplicate',
+    'fraudulent',
+    'requested_by_customer',
+    'abandoned',
+  ] as const);
   if (!CANCELABLE.includes(intent.status)) {
     throw unexpectedState(
       intent,
@@ -240,9 +256,13 @@ function fakeAuthenticate(ctx: ApiContext): PaymentIntent {
   const intent = findIntent(ctx);
   const p = new Params(ctx.raw, ['outcome']);
   const outcome = p.oneOf('outcome', ['success', 'failure'] as const);
-  if (!outcome) throw invalidRequest('Missing required param: outcome.', { param: 'outcome', code: 'parameter_missing' });
+  if (!outcome)
+    throw invalidRequest('Missing required param: outcome.', { param: 'outcome', code: 'parameter_missing' });
   if (intent.status !== 'requires_action') {
-    throw unexpectedState(intent, `This PaymentIntent has a status of ${intent.status}; only requires_action can be authenticated.`);
+    throw unexpectedState(
+      intent,
+      `This PaymentIntent has a status of ${intent.status}; only requires_action can be authenticated.`,
+    );
   }
   finishAuthentication(ctx, intent, outcome === 'success');
   return intent;

@@ -185,6 +185,9 @@ export function transferRoutes(runtime: Runtime): Router {
   router.get('/v1/transfers/:id', apiRoute(runtime, retrieve, { expandable: EXPANDABLE }));
   router.post('/v1/transfers/:id/reversals', apiRoute(runtime, reverse, { expandable: ['transfer'] }));
   router.get('/v1/transfers/:id/reversals', apiRoute(runtime, listReversals));
-  router.get('/v1/transfers/:id/reversals/:reversal', apiRoute(runtime, retrieveReversal, { expandable: ['transfer'] }));
+  router.get(
+    '/v1/transfers/:id/reversals/:reversal',
+    apiRoute(runtime, retrieveReversal, { expandable: ['transfer'] }),
+  );
   return router;
 }

@@ -20,7 +20,10 @@ function readEnabledEvents(p: Params, required: boolean): string[] | undefined {
   const events = p.stringArray('enabled_events');
   if (events === undefined) {
     if (!required) return undefined;
-    throw invalidRequest('Missing required param: enabled_events.', { param: 'enabled_events', code: 'parameter_missing' });
+    throw invalidRequest('Missing required param: enabled_events.', {
+      param: 'enabled_events',
+      code: 'parameter_missing',
+    });
   }
   if (events.length === 0) throw invalidRequest('enabled_events must not be empty.', { param: 'enabled_events' });
   events.forEach((type, index) => {

@@ -117,7 +117,15 @@ export class WebhookDispatcher {
       this.inFlight.delete(controller);
     }
     if (this.closed || generation !== this.generation) return;
-    this.record({ event: event.id, type: event.type, url: target.url, attempt, at: new Date().toISOString(), status, error });
+    this.record({
+      event: event.id,
+      type: event.type,
+      url: target.url,
+      attempt,
+      at: new Date().toISOString(),
+      status,
+      error,
+    });
     const ok = status !== null && status >= 200 && status < 300;
     if (ok) {
       this.options.onDelivered(event.id);
@@ -127,7 +135,9 @@ export class WebhookDispatcher {
     const delay = this.options.retryDelaysMs[attempt];
     const reason = error ?? `HTTP ${status}`;
     if (delay === undefined) {
-      this.options.log(`webhook ${event.id} (${event.type}) to ${target.url} given up after ${attempt + 1} attempts: ${reason}`);
+      this.options.log(
+        `webhook ${event.id} (${event.type}) to ${target.url} given up after ${attempt + 1} attempts: ${reason}`,
+      );
       this.finish();
       return;
     }
