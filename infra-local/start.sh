@@ -32,6 +32,7 @@ set -a
 # shellcheck source=/dev/null
 . .local/dev/services.env
 set +a
+export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true # the SDK warns on every start that later versions will need Node 22
 
 npm run db:migrate
 if [ ! -f .local/dev/seeded ]; then

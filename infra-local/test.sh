@@ -45,6 +45,7 @@ set -a
 # shellcheck source=/dev/null
 . .local/test/services.env
 set +a
+export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true # the SDK warns on every start that later versions will need Node 22
 
 banner "db:migrate"
 npm run db:migrate
