@@ -66,8 +66,19 @@ check() {
 }
 check typecheck npm run typecheck
 check lint npm run lint
-check vitest node_modules/.bin/vitest run
+rm -f tests/.artifacts/vitest-results.json
+check vitest node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json=tests/.artifacts/vitest-results.json
 
 banner "summary"
 printf '%s\n' "${summary[@]}"
+# One plain closing line: the test counts, with each failed check (typecheck, lint) counted as a failure.
+failed_checks=$(printf '%s\n' "${summary[@]}" | grep -c '^FAILED' || true)
+FAILED_CHECKS=$failed_checks node -e '
+  const fs = require("node:fs");
+  const extra = Number(process.env.FAILED_CHECKS || 0);
+  const file = "tests/.artifacts/vitest-results.json";
+  if (!fs.existsSync(file)) { console.log(`0 passed, ${Math.max(extra, 1)} failed`); process.exit(0); }
+  const r = JSON.parse(fs.readFileSync(file, "utf8"));
+  console.log(`${r.numPassedTests} passed, ${r.numFailedTests + (r.numFailedTests ? 0 : extra)} failed, ${r.numPendingTests + (r.numTodoTests || 0)} skipped`);
+'
 exit "$first_failure"

@@ -37,6 +37,7 @@ function fallbackMessage(status: number): string {
   if (status === 403) return 'Your account may not do that.';
   if (status === 404) return 'That could not be found.';
   if (status === 429) return 'Too many attempts. Wait a little and try again.';
+  if (status >= 502 && status <= 504) return 'Benchwright could not be reached just now. Try again in a moment.';
   if (status >= 500) return 'Something went wrong at Benchwright. Try again in a moment.';
   return 'The request could not be completed.';
 }

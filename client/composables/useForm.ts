@@ -120,6 +120,14 @@ export function useForm<TValues extends Record<string, string>, TOutput>(
     validateField,
     handleSubmit,
   });
+  // Once every flagged field is fixed, the "some answers need changing" summary goes too.
+  watch(
+    () => Object.keys(errors).length,
+    (count) => {
+      if (count === 0 && state.formError === CHECK_FIELDS_MESSAGE) state.formError = '';
+    },
+  );
+
   const { run, error: runError } = useAsync(async (data: TOutput, action: (data: TOutput) => Promise<void>) => {
     await action(data);
     return true;
