@@ -22,8 +22,18 @@ const envSchema = z.object({
   DB_PASSWORD: z.string().default(''),
 
   SESSION_SECRET: z.string().optional(),
-  SESSION_IDLE_MINUTES: z.coerce.number().int().min(1).max(24 * 60).default(30),
-  SESSION_ABSOLUTE_HOURS: z.coerce.number().int().min(1).max(24 * 30).default(12),
+  SESSION_IDLE_MINUTES: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(24 * 60)
+    .default(30),
+  SESSION_ABSOLUTE_HOURS: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(24 * 30)
+    .default(12),
   COOKIE_SECURE: bool.default(false),
 
   SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).default(5),

@@ -1,10 +1,4 @@
-import type {
-  EmailOnlyInput,
-  PasswordResetInput,
-  SignInInput,
-  SignUpInput,
-  TokenInput,
-} from '@shared/schemas/auth';
+import type { EmailOnlyInput, PasswordResetInput, SignInInput, SignUpInput, TokenInput } from '@shared/schemas/auth';
 import type { MessageView, SessionView } from '@shared/types/user';
 import { http } from './http';
 

@@ -14,8 +14,7 @@ export type ApiErrorKind =
   | 'unknown';
 
 /** Message shown when the browser gets no answer at all. */
-export const NETWORK_ERROR_MESSAGE =
-  'Benchwright could not be reached. Check your connection and try again.';
+export const NETWORK_ERROR_MESSAGE = 'Benchwright could not be reached. Check your connection and try again.';
 
 /** Map an HTTP status to the kind of failure it means. */
 export function kindForStatus(status: number): ApiErrorKind {

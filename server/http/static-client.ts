@@ -8,7 +8,10 @@ export function staticClient(distDir: string): Router | null {
   const index = path.join(root, 'index.html');
   if (!existsSync(index)) return null;
   const router = express.Router();
-  router.use('/assets', express.static(path.join(root, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
+  router.use(
+    '/assets',
+    express.static(path.join(root, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }),
+  );
   router.use(express.static(root, { index: false, maxAge: '1h' }));
   router.get('/{*splat}', (req, res, next) => {
     if (req.path.startsWith('/api/')) return next();

@@ -1,11 +1,5 @@
 import { z } from 'zod';
-import {
-  currentPasswordField,
-  displayNameField,
-  emailField,
-  newPasswordField,
-  tokenField,
-} from './fields';
+import { currentPasswordField, displayNameField, emailField, newPasswordField, tokenField } from './fields';
 
 /** POST /api/auth/sign-up */
 export const signUpSchema = z.strictObject({

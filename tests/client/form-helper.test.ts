@@ -94,7 +94,9 @@ describe('the form helper on the join page', () => {
   });
 
   it('shows "check your inbox" with the address after joining', async () => {
-    stubApi({ 'POST /api/auth/sign-up': { status: 202, body: { message: 'If the address can be used, a link is on its way.' } } });
+    stubApi({
+      'POST /api/auth/sign-up': { status: 202, body: { message: 'If the address can be used, a link is on its way.' } },
+    });
     const wrapper = await mountJoinPage();
     await wrapper.find('#sign-up-displayName').setValue('Ada Siding');
     await wrapper.find('#sign-up-email').setValue('Ada.Siding@Example.org');

@@ -74,7 +74,10 @@ describe('the access guard', () => {
   });
 
   it('treats everyone as a visitor when the server cannot be reached', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => Promise.reject(new TypeError('offline'))));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => Promise.reject(new TypeError('offline'))),
+    );
 
     const outcome = await accessGuard(makeRouter().resolve('/') as never);
 

@@ -43,7 +43,12 @@ describe('the http wrapper', () => {
     const error = await http.post('/api/auth/sign-up', {}).catch((e: unknown) => e);
 
     expect(error).toBeInstanceOf(ApiError);
-    expect(error).toMatchObject({ status: 422, kind: 'validation', code: 'validation_failed', message: 'Check the form.' });
+    expect(error).toMatchObject({
+      status: 422,
+      kind: 'validation',
+      code: 'validation_failed',
+      message: 'Check the form.',
+    });
     expect((error as ApiError).fields).toEqual({ password: 'Too common.' });
   });
 
@@ -62,7 +67,10 @@ describe('the http wrapper', () => {
   });
 
   it('gives a sentence of its own when a 502 answer is not JSON', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => new Response('<html>Bad gateway</html>', { status: 502 })));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => new Response('<html>Bad gateway</html>', { status: 502 })),
+    );
 
     const error = (await http.get('/api/account').catch((e: unknown) => e)) as ApiError;
 
@@ -72,7 +80,10 @@ describe('the http wrapper', () => {
   });
 
   it('says Benchwright could not be reached when the network fails', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))),
+    );
 
     const error = await http.get('/api/auth/session').catch((e: unknown) => e);
 
@@ -101,7 +112,10 @@ describe('the http wrapper', () => {
 
   it('gives up after one retry when the CSRF token is refused again', async () => {
     const fetchStub = stubApi({
-      'POST /api/account/profile': { status: 403, body: { error: { code: 'csrf_invalid', message: 'Reload the page.' } } },
+      'POST /api/account/profile': {
+        status: 403,
+        body: { error: { code: 'csrf_invalid', message: 'Reload the page.' } },
+      },
       'GET /api/auth/session': { body: { user: null, csrfToken: 'token-2' } },
     });
 

@@ -14,7 +14,9 @@ describe('a page whose session has ended', () => {
   });
 
   it('sends the person to sign in and remembers where they were', async () => {
-    stubApi({ 'GET /api/account': { status: 401, body: { error: { code: 'not_signed_in', message: 'Sign in first.' } } } });
+    stubApi({
+      'GET /api/account': { status: 401, body: { error: { code: 'not_signed_in', message: 'Sign in first.' } } },
+    });
     const pinia = createPinia();
     const router = createRouter({ history: createMemoryHistory(), routes });
     await router.push('/account');

@@ -40,14 +40,18 @@ describe('the sign-in page', () => {
   });
 
   it('shows a wrong password as a message for the whole form and keeps the address', async () => {
-    const { wrapper } = await signInWith(apiError(401, 'invalid_credentials', 'That e-mail address and password do not match.'));
+    const { wrapper } = await signInWith(
+      apiError(401, 'invalid_credentials', 'That e-mail address and password do not match.'),
+    );
 
     expect(wrapper.find('[role="alert"]').text()).toContain('do not match');
     expect((wrapper.find('#sign-in-email').element as HTMLInputElement).value).toBe('ada.siding@example.org');
   });
 
   it('offers to send the link again when the address is not confirmed', async () => {
-    const { wrapper, fetchStub } = await signInWith(apiError(403, 'email_unverified', 'Confirm your e-mail address first.'));
+    const { wrapper, fetchStub } = await signInWith(
+      apiError(403, 'email_unverified', 'Confirm your e-mail address first.'),
+    );
 
     const resend = wrapper.findAll('button').find((b) => b.text() === 'Send the link again');
     expect(resend).toBeDefined();

@@ -20,20 +20,28 @@ describe('cross-site request forgery', () => {
   ])('refuses %s carrying the session cookie without the token, and changes nothing', async (_kind, type, body) => {
     const user = await buildUser(app.ctx.dataSource, { displayName: 'Ivo Original' });
     const agent = await browserLikeAgent(app);
-    useToken(agent, (await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(200)).body);
+    useToken(
+      agent,
+      (await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(200)).body,
+    );
 
     const res = await agent.patch('/api/account/profile').set('X-CSRF-Token', '').set('Content-Type', type).send(body);
 
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('csrf_invalid');
-    expect((await app.ctx.dataSource.getRepository(User).findOneByOrFail({ id: user.id })).displayName).toBe('Ivo Original');
+    expect((await app.ctx.dataSource.getRepository(User).findOneByOrFail({ id: user.id })).displayName).toBe(
+      'Ivo Original',
+    );
   });
 
   it('refuses a token from another session', async () => {
     const other = await browserLikeAgent(app);
     const { body } = await other.get('/api/auth/session');
 
-    const res = await request(app.app).post('/api/auth/resend-verification').set('X-CSRF-Token', body.csrfToken).send({ email: 'a@example.test' });
+    const res = await request(app.app)
+      .post('/api/auth/resend-verification')
+      .set('X-CSRF-Token', body.csrfToken)
+      .send({ email: 'a@example.test' });
 
     expect(res.status).toBe(403);
   });
@@ -41,7 +49,10 @@ describe('cross-site request forgery', () => {
   it('refuses a state change whose Origin is another site, even with a valid token', async () => {
     const agent = await browserLikeAgent(app);
 
-    const res = await agent.post('/api/auth/resend-verification').set('Origin', 'https://elsewhere.example').send({ email: 'a@example.test' });
+    const res = await agent
+      .post('/api/auth/resend-verification')
+      .set('Origin', 'https://elsewhere.example')
+      .send({ email: 'a@example.test' });
 
     expect(res.status).toBe(403);
   });

@@ -35,7 +35,13 @@ const EXPECTED: Record<string, Access> = {
 };
 
 type Persona = 'visitor' | 'member' | 'builder' | 'moderator' | 'admin' | 'suspended';
-const RANK: Record<Exclude<Persona, 'suspended'>, number> = { visitor: 0, member: 1, builder: 1, moderator: 2, admin: 3 };
+const RANK: Record<Exclude<Persona, 'suspended'>, number> = {
+  visitor: 0,
+  member: 1,
+  builder: 1,
+  moderator: 2,
+  admin: 3,
+};
 const NEEDED: Record<Access, number> = { anyone: 0, member: 1, moderator: 2, admin: 3 };
 
 interface RouteLayer {
@@ -47,7 +53,9 @@ function routesOf(instance: AppInstance): string[] {
     (router.stack as RouteLayer[])
       .filter((layer) => layer.route)
       .flatMap((layer) =>
-        Object.keys(layer.route!.methods).map((m) => `${m.toUpperCase()} /api${mount}${layer.route!.path === '/' ? '' : layer.route!.path}`),
+        Object.keys(layer.route!.methods).map(
+          (m) => `${m.toUpperCase()} /api${mount}${layer.route!.path === '/' ? '' : layer.route!.path}`,
+        ),
       ),
   );
 }
@@ -61,8 +69,15 @@ beforeAll(async () => {
     const role = persona === 'suspended' ? 'member' : persona;
     const user = await buildUser(app.ctx.dataSource, { role });
     const agent = await browserLikeAgent(app);
-    useToken(agent, (await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(200)).body);
-    if (persona === 'suspended') await app.ctx.dataSource.query('UPDATE users SET suspended_at = NOW(3), suspended_reason = ? WHERE id = ?', ['matrix check', user.id]);
+    useToken(
+      agent,
+      (await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(200)).body,
+    );
+    if (persona === 'suspended')
+      await app.ctx.dataSource.query('UPDATE users SET suspended_at = NOW(3), suspended_reason = ? WHERE id = ?', [
+        'matrix check',
+        user.id,
+      ]);
     agents.set(persona, agent);
   }
   agents.set('visitor', await browserLikeAgent(app));
@@ -76,7 +91,9 @@ describe('role × route matrix', () => {
 
   const personas: Persona[] = ['visitor', 'member', 'builder', 'moderator', 'admin', 'suspended'];
   // Sign-out last, so it does not end the personas' sessions before the other routes are tried.
-  const ordered = Object.entries(EXPECTED).sort(([a], [b]) => Number(a.endsWith('sign-out')) - Number(b.endsWith('sign-out')));
+  const ordered = Object.entries(EXPECTED).sort(
+    ([a], [b]) => Number(a.endsWith('sign-out')) - Number(b.endsWith('sign-out')),
+  );
 
   for (const persona of personas) {
     it(`lets a ${persona} through exactly the routes their role allows`, async () => {
@@ -86,7 +103,9 @@ describe('role × route matrix', () => {
       for (const [route, access] of ordered) {
         const [method, path] = route.split(' ') as [string, string];
         const url = path.replace(':id', '999999999');
-        const res = await (agent as unknown as Record<string, (u: string) => request.Test>)[method.toLowerCase()]!(url).send({});
+        const res = await (agent as unknown as Record<string, (u: string) => request.Test>)[method.toLowerCase()]!(
+          url,
+        ).send({});
         const allowed = rank >= NEEDED[access];
         outcomes[route] = res.status;
         if (allowed) expect([401, 403], `${persona} ${route}`).not.toContain(res.status);

@@ -39,7 +39,9 @@ describe('/api/account', () => {
     const here = await signedInAs(user);
     const elsewhere = await signedInAs(user);
 
-    const res = await here.post('/api/account/password').send({ currentPassword: GOOD_PASSWORD, newPassword: 'cross-members-at-400-centres' });
+    const res = await here
+      .post('/api/account/password')
+      .send({ currentPassword: GOOD_PASSWORD, newPassword: 'cross-members-at-400-centres' });
 
     expect(res.status).toBe(200);
     useToken(here, res.body);
@@ -51,7 +53,9 @@ describe('/api/account', () => {
   it('names the current-password field when it is wrong', async () => {
     const agent = await signedInAs(await buildUser(app.ctx.dataSource));
 
-    const res = await agent.post('/api/account/password').send({ currentPassword: 'not-my-password', newPassword: 'cross-members-at-400-centres' });
+    const res = await agent
+      .post('/api/account/password')
+      .send({ currentPassword: 'not-my-password', newPassword: 'cross-members-at-400-centres' });
 
     expect(res.status).toBe(422);
     expect(res.body.error.fields).toEqual({ currentPassword: 'Your current password is not right.' });
@@ -64,7 +68,10 @@ describe('/api/account', () => {
 
     await agent.post('/api/account/email').send({ newEmail, currentPassword: GOOD_PASSWORD }).expect(202);
     expect((await app.ctx.dataSource.getRepository(User).findOneByOrFail({ id: user.id })).email).toBe(user.email);
-    const token = linkIn(await waitForMail(newEmail, 'Confirm your new e-mail'), '/account/confirm-email').searchParams.get('token');
+    const token = linkIn(
+      await waitForMail(newEmail, 'Confirm your new e-mail'),
+      '/account/confirm-email',
+    ).searchParams.get('token');
     await agent.post('/api/account/email/confirm').send({ token }).expect(200);
 
     expect((await app.ctx.dataSource.getRepository(User).findOneByOrFail({ id: user.id })).email).toBe(newEmail);

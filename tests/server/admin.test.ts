@@ -51,18 +51,27 @@ describe('/api/admin/users', () => {
     const target = await buildUser(app.ctx.dataSource);
     const agent = await signedInAs(admin);
 
-    const res = await agent.patch(`/api/admin/users/${target.id}/role`).send({ role: 'moderator', reason: 'Joined the review team' });
+    const res = await agent
+      .patch(`/api/admin/users/${target.id}/role`)
+      .send({ role: 'moderator', reason: 'Joined the review team' });
 
     expect(res.status).toBe(200);
     expect(res.body.user.role).toBe('moderator');
-    const events = await app.ctx.dataSource.getRepository(AuditEvent).findBy({ action: 'user.role_changed', targetId: String(target.id) });
+    const events = await app.ctx.dataSource
+      .getRepository(AuditEvent)
+      .findBy({ action: 'user.role_changed', targetId: String(target.id) });
     expect(events).toHaveLength(1);
-    expect(events[0]).toMatchObject({ actorId: admin.id, detail: { from: 'member', to: 'moderator', reason: 'Joined the review team' } });
+    expect(events[0]).toMatchObject({
+      actorId: admin.id,
+      detail: { from: 'member', to: 'moderator', reason: 'Joined the review team' },
+    });
   });
 
   it('refuses to change the administrator’s own role', async () => {
     const agent = await signedInAs(admin);
-    const res = await agent.patch(`/api/admin/users/${admin.id}/role`).send({ role: 'member', reason: 'Testing myself' });
+    const res = await agent
+      .patch(`/api/admin/users/${admin.id}/role`)
+      .send({ role: 'member', reason: 'Testing myself' });
     expect(res.status).toBe(409);
   });
 
@@ -81,10 +90,17 @@ describe('/api/admin/users', () => {
     const targetAgent = await signedInAs(target);
     const agent = await signedInAs(admin);
 
-    await agent.post(`/api/admin/users/${target.id}/suspension`).send({ reason: 'Repeated misleading listings' }).expect(200);
+    await agent
+      .post(`/api/admin/users/${target.id}/suspension`)
+      .send({ reason: 'Repeated misleading listings' })
+      .expect(200);
 
     await targetAgent.get('/api/account').expect(401);
-    const refused = await (await browserLikeAgent(app)).post('/api/auth/sign-in').send({ email: target.email, password: GOOD_PASSWORD });
+    const refused = await (
+      await browserLikeAgent(app)
+    )
+      .post('/api/auth/sign-in')
+      .send({ email: target.email, password: GOOD_PASSWORD });
     expect(refused.body.error.message).toContain('Repeated misleading listings');
     await agent.delete(`/api/admin/users/${target.id}/suspension`).expect(200);
     await signedInAs(target);

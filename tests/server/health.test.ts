@@ -14,7 +14,11 @@ describe('GET /api/health', () => {
     const res = await request(app.app).get('/api/health');
 
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ status: 'ok', down: [], parts: { database: { ok: true }, storage: { ok: true }, payments: { ok: true }, mail: { ok: true } } });
+    expect(res.body).toMatchObject({
+      status: 'ok',
+      down: [],
+      parts: { database: { ok: true }, storage: { ok: true }, payments: { ok: true }, mail: { ok: true } },
+    });
     expect(res.headers['set-cookie']).toBeUndefined();
   });
 

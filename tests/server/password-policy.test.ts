@@ -11,9 +11,12 @@ describe('passwordProblem', () => {
     expect(passwordProblem(pw, someone)).toMatch(/most commonly used/);
   });
 
-  it.each(['qwertyuiop123', '1234password!!', 'dragondragondragon', 'abcabcabcabc'])('refuses "%s", a common password padded or repeated', (pw) => {
-    expect(passwordProblem(pw, someone)).toMatch(/most commonly used/);
-  });
+  it.each(['qwertyuiop123', '1234password!!', 'dragondragondragon', 'abcabcabcabc'])(
+    'refuses "%s", a common password padded or repeated',
+    (pw) => {
+      expect(passwordProblem(pw, someone)).toMatch(/most commonly used/);
+    },
+  );
 
   it('refuses a password containing the name, the address or the site name', () => {
     expect(passwordProblem('owenpellby-layout', someone)).toMatch(/must not contain/);
@@ -27,7 +30,9 @@ describe('passwordProblem', () => {
 
   it('accepts every demo account password, so the seed always works', () => {
     for (const a of DEMO_ACCOUNTS) {
-      expect(signUpSchema.safeParse({ email: a.email, displayName: a.displayName, password: a.password }).success).toBe(true);
+      expect(signUpSchema.safeParse({ email: a.email, displayName: a.displayName, password: a.password }).success).toBe(
+        true,
+      );
       expect(passwordProblem(a.password, a)).toBeNull();
     }
   });

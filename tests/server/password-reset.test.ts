@@ -30,7 +30,10 @@ describe('password reset', () => {
   it('sets the new password once, ends existing sessions, and refuses the link a second time', async () => {
     const user = await buildUser(app.ctx.dataSource);
     const signedIn = await browserLikeAgent(app);
-    useToken(signedIn, (await signedIn.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(200)).body);
+    useToken(
+      signedIn,
+      (await signedIn.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(200)).body,
+    );
     const agent = await browserLikeAgent(app);
     await agent.post('/api/auth/password-reset/request').send({ email: user.email }).expect(202);
     const token = linkIn(await waitForMail(user.email, 'Reset your'), '/reset-password').searchParams.get('token');
@@ -40,7 +43,11 @@ describe('password reset', () => {
     await signedIn.get('/api/account').expect(401);
     await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(401);
     await agent.post('/api/auth/sign-in').send({ email: user.email, password: NEW_PASSWORD }).expect(200);
-    const again = await (await browserLikeAgent(app)).post('/api/auth/password-reset/confirm').send({ token, password: 'another-fine-password' });
+    const again = await (
+      await browserLikeAgent(app)
+    )
+      .post('/api/auth/password-reset/confirm')
+      .send({ token, password: 'another-fine-password' });
     expect(again.body.error.code).toBe('token_invalid');
     await waitForMail(user.email, 'password was changed');
   });
@@ -61,7 +68,8 @@ describe('password reset', () => {
   it('limits reset e-mails for one address to three an hour', async () => {
     const user = await buildUser(app.ctx.dataSource);
     const agent = await browserLikeAgent(app);
-    for (let i = 0; i < 3; i += 1) await agent.post('/api/auth/password-reset/request').send({ email: user.email }).expect(202);
+    for (let i = 0; i < 3; i += 1)
+      await agent.post('/api/auth/password-reset/request').send({ email: user.email }).expect(202);
 
     const fourth = await agent.post('/api/auth/password-reset/request').send({ email: user.email });
 

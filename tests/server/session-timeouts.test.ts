@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, it } from 'vitest';
 import type { AppInstance } from '../../server/app';
 import { buildUser, GOOD_PASSWORD } from '../support/factories';
 import { browserLikeAgent, startTestApp, useToken } from '../support/test-app';
@@ -11,18 +11,28 @@ afterAll(() => app.close());
 
 /** Move the stored session's clock back, as if time had passed. */
 async function ageSession(userId: number, field: 'lastSeenAt' | 'signedInAt', ms: number) {
-  const rows: { session_id: string; data: string }[] = await app.ctx.dataSource.query('SELECT session_id, data FROM sessions');
-  const row = rows.find((r) => (JSON.parse(r.data) as { passport?: { user?: string } }).passport?.user?.startsWith(`${userId}:`));
+  const rows: { session_id: string; data: string }[] = await app.ctx.dataSource.query(
+    'SELECT session_id, data FROM sessions',
+  );
+  const row = rows.find((r) =>
+    (JSON.parse(r.data) as { passport?: { user?: string } }).passport?.user?.startsWith(`${userId}:`),
+  );
   if (!row) throw new Error('session not found');
   const data = JSON.parse(row.data) as Record<string, number>;
   data[field] = (data[field] ?? Date.now()) - ms;
-  await app.ctx.dataSource.query('UPDATE sessions SET data = ? WHERE session_id = ?', [JSON.stringify(data), row.session_id]);
+  await app.ctx.dataSource.query('UPDATE sessions SET data = ? WHERE session_id = ?', [
+    JSON.stringify(data),
+    row.session_id,
+  ]);
 }
 
 async function signedIn() {
   const user = await buildUser(app.ctx.dataSource);
   const agent = await browserLikeAgent(app);
-  useToken(agent, (await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(200)).body);
+  useToken(
+    agent,
+    (await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(200)).body,
+  );
   return { user, agent };
 }
 

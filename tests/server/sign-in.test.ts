@@ -12,7 +12,10 @@ beforeAll(async () => {
 afterAll(() => app.close());
 
 const sessionCookie = (res: request.Response) =>
-  ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith(`${SESSION_COOKIE}=`))?.split(';')[0];
+  ([] as string[])
+    .concat(res.headers['set-cookie'] ?? [])
+    .find((c) => c.startsWith(`${SESSION_COOKIE}=`))
+    ?.split(';')[0];
 
 describe('POST /api/auth/sign-in', () => {
   it('signs in, issues a new session id and a new CSRF token', async () => {
@@ -23,7 +26,12 @@ describe('POST /api/auth/sign-in', () => {
     const res = await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD });
 
     expect(res.status).toBe(200);
-    expect(res.body.user).toMatchObject({ email: user.email, displayName: 'Esme Turnout', role: 'member', emailVerified: true });
+    expect(res.body.user).toMatchObject({
+      email: user.email,
+      displayName: 'Esme Turnout',
+      role: 'member',
+      emailVerified: true,
+    });
     expect(res.body.user).not.toHaveProperty('passwordHash');
     expect(sessionCookie(res)).toBeDefined();
     expect(sessionCookie(res)).not.toBe(sessionCookie(before));
@@ -35,8 +43,12 @@ describe('POST /api/auth/sign-in', () => {
     const user = await buildUser(app.ctx.dataSource);
     const agent = await browserLikeAgent(app);
 
-    const wrong = await agent.post('/api/auth/sign-in').send({ email: user.email, password: 'not-the-password-at-all' });
-    const unknown = await agent.post('/api/auth/sign-in').send({ email: uniqueEmail(), password: 'not-the-password-at-all' });
+    const wrong = await agent
+      .post('/api/auth/sign-in')
+      .send({ email: user.email, password: 'not-the-password-at-all' });
+    const unknown = await agent
+      .post('/api/auth/sign-in')
+      .send({ email: uniqueEmail(), password: 'not-the-password-at-all' });
 
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
@@ -67,7 +79,10 @@ describe('POST /api/auth/sign-in', () => {
   it('ends the session at sign-out so the old cookie no longer works', async () => {
     const user = await buildUser(app.ctx.dataSource);
     const agent = await browserLikeAgent(app);
-    const signIn = await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(200);
+    const signIn = await agent
+      .post('/api/auth/sign-in')
+      .send({ email: user.email, password: GOOD_PASSWORD })
+      .expect(200);
     const oldCookie = sessionCookie(signIn)!;
     useToken(agent, signIn.body);
 
@@ -85,7 +100,10 @@ describe('sign-in rate limits', () => {
       const user = await buildUser(limited.ctx.dataSource);
       const agent = await browserLikeAgent(limited);
       for (let i = 0; i < 3; i += 1) {
-        await agent.post('/api/auth/sign-in').send({ email: user.email, password: 'wrong-password-number' }).expect(401);
+        await agent
+          .post('/api/auth/sign-in')
+          .send({ email: user.email, password: 'wrong-password-number' })
+          .expect(401);
       }
 
       const res = await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD });
@@ -103,10 +121,17 @@ describe('sign-in rate limits', () => {
     try {
       const agent = await browserLikeAgent(limited);
       for (let i = 0; i < 3; i += 1) {
-        await agent.post('/api/auth/sign-in').set('X-Forwarded-For', `203.0.113.${i}`).send({ email: uniqueEmail(), password: 'wrong-password-number' }).expect(401);
+        await agent
+          .post('/api/auth/sign-in')
+          .set('X-Forwarded-For', `203.0.113.${i}`)
+          .send({ email: uniqueEmail(), password: 'wrong-password-number' })
+          .expect(401);
       }
 
-      const res = await agent.post('/api/auth/sign-in').set('X-Forwarded-For', '198.51.100.7').send({ email: uniqueEmail(), password: 'wrong-password-number' });
+      const res = await agent
+        .post('/api/auth/sign-in')
+        .set('X-Forwarded-For', '198.51.100.7')
+        .send({ email: uniqueEmail(), password: 'wrong-password-number' });
 
       expect(res.status).toBe(429);
     } finally {

@@ -17,7 +17,9 @@ describe('POST /api/auth/sign-up', () => {
     const agent = await browserLikeAgent(app);
     const email = uniqueEmail();
 
-    const res = await agent.post('/api/auth/sign-up').send({ email: email.toUpperCase(), displayName: 'Ada Pennant', password: GOOD_PASSWORD });
+    const res = await agent
+      .post('/api/auth/sign-up')
+      .send({ email: email.toUpperCase(), displayName: 'Ada Pennant', password: GOOD_PASSWORD });
 
     expect(res.status).toBe(202);
     const mail = await waitForMail(email, 'Confirm your e-mail address');
@@ -31,9 +33,13 @@ describe('POST /api/auth/sign-up', () => {
   it('gives the same answer for an address that already has an account, and tells its owner', async () => {
     const owner = await buildUser(app.ctx.dataSource);
     const agent = await browserLikeAgent(app);
-    const fresh = await agent.post('/api/auth/sign-up').send({ email: uniqueEmail(), displayName: 'New Person', password: GOOD_PASSWORD });
+    const fresh = await agent
+      .post('/api/auth/sign-up')
+      .send({ email: uniqueEmail(), displayName: 'New Person', password: GOOD_PASSWORD });
 
-    const taken = await agent.post('/api/auth/sign-up').send({ email: owner.email, displayName: 'Someone Else', password: GOOD_PASSWORD });
+    const taken = await agent
+      .post('/api/auth/sign-up')
+      .send({ email: owner.email, displayName: 'Someone Else', password: GOOD_PASSWORD });
 
     expect(taken.status).toBe(fresh.status);
     expect(taken.body).toEqual(fresh.body);
@@ -43,7 +49,10 @@ describe('POST /api/auth/sign-up', () => {
   it('refuses a link that has already been used', async () => {
     const agent = await browserLikeAgent(app);
     const email = uniqueEmail();
-    await agent.post('/api/auth/sign-up').send({ email, displayName: 'Bram Siding', password: GOOD_PASSWORD }).expect(202);
+    await agent
+      .post('/api/auth/sign-up')
+      .send({ email, displayName: 'Bram Siding', password: GOOD_PASSWORD })
+      .expect(202);
     const token = linkIn(await waitForMail(email, 'Confirm'), '/verify-email').searchParams.get('token');
     await agent.post('/api/auth/verify-email').send({ token }).expect(200);
 
@@ -57,7 +66,9 @@ describe('POST /api/auth/sign-up', () => {
     const agent = await browserLikeAgent(app);
     const email = uniqueEmail();
 
-    const res = await agent.post('/api/auth/sign-up').send({ email, displayName: 'J', password: 'short', role: 'admin' });
+    const res = await agent
+      .post('/api/auth/sign-up')
+      .send({ email, displayName: 'J', password: 'short', role: 'admin' });
 
     expect(res.status).toBe(422);
     expect(res.body.error.code).toBe('validation_failed');
@@ -72,7 +83,9 @@ describe('POST /api/auth/sign-up', () => {
   it('refuses one of the most common passwords, even with digits added', async () => {
     const agent = await browserLikeAgent(app);
 
-    const res = await agent.post('/api/auth/sign-up').send({ email: uniqueEmail(), displayName: 'Cass Viaduct', password: 'qwertyuiop123' });
+    const res = await agent
+      .post('/api/auth/sign-up')
+      .send({ email: uniqueEmail(), displayName: 'Cass Viaduct', password: 'qwertyuiop123' });
 
     expect(res.status).toBe(422);
     expect(res.body.error.fields.password).toMatch(/most commonly used/);
@@ -92,7 +105,9 @@ describe('POST /api/auth/sign-up', () => {
   it('refuses a request without the session CSRF token and sends no e-mail', async () => {
     const email = uniqueEmail();
 
-    const res = await request(app.app).post('/api/auth/sign-up').send({ email, displayName: 'Dee Fishplate', password: GOOD_PASSWORD });
+    const res = await request(app.app)
+      .post('/api/auth/sign-up')
+      .send({ email, displayName: 'Dee Fishplate', password: GOOD_PASSWORD });
 
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('csrf_invalid');

@@ -4,7 +4,11 @@ import { signInSchema, signUpSchema } from '../../shared/schemas/auth';
 
 describe('signUpSchema', () => {
   it('trims and lower-cases the e-mail address', () => {
-    const parsed = signUpSchema.parse({ email: '  Owen@Example.TEST ', displayName: ' Owen ', password: 'twelve-chars-ok' });
+    const parsed = signUpSchema.parse({
+      email: '  Owen@Example.TEST ',
+      displayName: ' Owen ',
+      password: 'twelve-chars-ok',
+    });
     expect(parsed).toEqual({ email: 'owen@example.test', displayName: 'Owen', password: 'twelve-chars-ok' });
   });
 
@@ -14,7 +18,12 @@ describe('signUpSchema', () => {
   });
 
   it('refuses fields it does not know, such as a role', () => {
-    const result = signUpSchema.safeParse({ email: 'a@example.test', displayName: 'Al', password: 'twelve-chars-ok', role: 'admin' });
+    const result = signUpSchema.safeParse({
+      email: 'a@example.test',
+      displayName: 'Al',
+      password: 'twelve-chars-ok',
+      role: 'admin',
+    });
     expect(result.success).toBe(false);
   });
 
@@ -33,7 +42,10 @@ describe('signInSchema', () => {
 
 describe('changePasswordSchema', () => {
   it('puts "choose a different password" on the new-password field', () => {
-    const result = changePasswordSchema.safeParse({ currentPassword: 'same-password-twice', newPassword: 'same-password-twice' });
+    const result = changePasswordSchema.safeParse({
+      currentPassword: 'same-password-twice',
+      newPassword: 'same-password-twice',
+    });
     expect(result.error?.issues[0]?.path).toEqual(['newPassword']);
   });
 });

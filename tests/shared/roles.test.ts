@@ -3,7 +3,8 @@ import { hasAnyRole, roleSatisfies } from '../../shared/roles';
 
 describe('roleSatisfies', () => {
   it('lets every account do what a member may', () => {
-    for (const role of ['member', 'builder', 'moderator', 'admin'] as const) expect(roleSatisfies(role, 'member')).toBe(true);
+    for (const role of ['member', 'builder', 'moderator', 'admin'] as const)
+      expect(roleSatisfies(role, 'member')).toBe(true);
   });
 
   it('lets an administrator do what a moderator may, but not the reverse', () => {

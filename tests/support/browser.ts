@@ -5,7 +5,15 @@ import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
 /** Debian's Chromium; never a downloaded browser. */
 export const CHROMIUM = '/usr/bin/chromium';
-const ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+const ARGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
 
 export const ARTIFACTS = path.resolve('tests/.artifacts');
 
@@ -18,7 +26,13 @@ export interface BrowserSession {
 /** A fresh headless Chromium profile with one page, at a desktop or phone width. */
 export async function openBrowser(viewport = { width: 1280, height: 900 }): Promise<BrowserSession> {
   const profile = mkdtempSync(path.join(os.tmpdir(), 'bw-chromium-'));
-  const context = await chromium.launchPersistentContext(profile, { executablePath: CHROMIUM, headless: true, args: ARGS, viewport, locale: 'en-GB' });
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: CHROMIUM,
+    headless: true,
+    args: ARGS,
+    viewport,
+    locale: 'en-GB',
+  });
   const page = context.pages()[0] ?? (await context.newPage());
   return {
     context,

@@ -3,7 +3,10 @@ import { loadConfig, type Config } from '../../server/config';
 
 /** The test profile's services (started by `npm test`), as process environment. */
 export function applyTestEnv(): void {
-  Object.assign(process.env, loadServicesEnv('test'), { NODE_ENV: 'test', LOG_LEVEL: process.env.TEST_LOG_LEVEL ?? 'silent' });
+  Object.assign(process.env, loadServicesEnv('test'), {
+    NODE_ENV: 'test',
+    LOG_LEVEL: process.env.TEST_LOG_LEVEL ?? 'silent',
+  });
 }
 
 let counter = 0;

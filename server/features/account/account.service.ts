@@ -44,7 +44,13 @@ export async function changePassword(ctx: AppContext, req: Request, body: Change
     user.sessionEpoch += 1;
     await m.save(user);
     await enqueueEmail(m, user.email, mailTemplates.passwordChanged(user.displayName));
-    await recordAudit(m, { actorId: user.id, action: 'account.password_changed', targetType: 'user', targetId: user.id, ip });
+    await recordAudit(m, {
+      actorId: user.id,
+      action: 'account.password_changed',
+      targetType: 'user',
+      targetId: user.id,
+      ip,
+    });
     return user;
   });
   await logIn(req, updated);
@@ -76,10 +82,18 @@ export async function confirmEmailChange(ctx: AppContext, token: string, ip: str
       user.emailVerifiedAt = new Date();
       await m.save(user);
       await enqueueEmail(m, oldEmail, mailTemplates.emailChanged(user.displayName, user.email));
-      await recordAudit(m, { actorId: user.id, action: 'account.email_changed', targetType: 'user', targetId: user.id, detail: { from: oldEmail, to: user.email }, ip });
+      await recordAudit(m, {
+        actorId: user.id,
+        action: 'account.email_changed',
+        targetType: 'user',
+        targetId: user.id,
+        detail: { from: oldEmail, to: user.email },
+        ip,
+      });
     });
   } catch (error) {
-    if (isDuplicate(error)) throw conflict('email_taken', 'Another account now uses that address. Choose a different one.');
+    if (isDuplicate(error))
+      throw conflict('email_taken', 'Another account now uses that address. Choose a different one.');
     throw error;
   }
   return 'Your e-mail address has been changed.';

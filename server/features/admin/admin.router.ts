@@ -26,16 +26,31 @@ export function adminRouter(ctx: AppContext): Router {
     res.json(await admin.listUsers(ctx, input<UserListQuery>(res, 'query')));
   });
 
-  router.patch('/users/:id/role', validate(userIdParamSchema, 'params'), validate(changeRoleSchema), async (req, res) => {
-    const { role, reason } = input<ChangeRoleInput>(res);
-    const user = await admin.changeRole(ctx, actorOf(req), input<{ id: number }>(res, 'params').id, role, reason);
-    res.json({ user: presentUserForAdmin(user) });
-  });
+  router.patch(
+    '/users/:id/role',
+    validate(userIdParamSchema, 'params'),
+    validate(changeRoleSchema),
+    async (req, res) => {
+      const { role, reason } = input<ChangeRoleInput>(res);
+      const user = await admin.changeRole(ctx, actorOf(req), input<{ id: number }>(res, 'params').id, role, reason);
+      res.json({ user: presentUserForAdmin(user) });
+    },
+  );
 
-  router.post('/users/:id/suspension', validate(userIdParamSchema, 'params'), validate(suspendSchema), async (req, res) => {
-    const user = await admin.suspend(ctx, actorOf(req), input<{ id: number }>(res, 'params').id, input<SuspendInput>(res).reason);
-    res.json({ user: presentUserForAdmin(user) });
-  });
+  router.post(
+    '/users/:id/suspension',
+    validate(userIdParamSchema, 'params'),
+    validate(suspendSchema),
+    async (req, res) => {
+      const user = await admin.suspend(
+        ctx,
+        actorOf(req),
+        input<{ id: number }>(res, 'params').id,
+        input<SuspendInput>(res).reason,
+      );
+      res.json({ user: presentUserForAdmin(user) });
+    },
+  );
 
   router.delete('/users/:id/suspension', validate(userIdParamSchema, 'params'), async (req, res) => {
     const user = await admin.reinstate(ctx, actorOf(req), input<{ id: number }>(res, 'params').id);

@@ -20,10 +20,17 @@ export async function listUsers(ctx: AppContext, query: UserListQuery): Promise<
 
 /** Administrators act on other accounts only, so nobody locks themselves out by accident. */
 function assertNotSelf(actor: Actor, targetId: number, what: string): void {
-  if (actor.id === targetId) throw conflict('own_account', `You cannot ${what} your own account. Ask another administrator.`);
+  if (actor.id === targetId)
+    throw conflict('own_account', `You cannot ${what} your own account. Ask another administrator.`);
 }
 
-export async function changeRole(ctx: AppContext, actor: Actor, userId: number, role: Role, reason: string): Promise<User> {
+export async function changeRole(
+  ctx: AppContext,
+  actor: Actor,
+  userId: number,
+  role: Role,
+  reason: string,
+): Promise<User> {
   assertNotSelf(actor, userId, 'change the role of');
   return ctx.transaction(async (m) => {
     const user = await lockUser(m, userId);
@@ -31,7 +38,14 @@ export async function changeRole(ctx: AppContext, actor: Actor, userId: number, 
     const from = user.role;
     user.role = role;
     await m.save(user);
-    await recordAudit(m, { actorId: actor.id, action: 'user.role_changed', targetType: 'user', targetId: user.id, detail: { from, to: role, reason }, ip: actor.ip });
+    await recordAudit(m, {
+      actorId: actor.id,
+      action: 'user.role_changed',
+      targetType: 'user',
+      targetId: user.id,
+      detail: { from, to: role, reason },
+      ip: actor.ip,
+    });
     return user;
   });
 }
@@ -45,7 +59,14 @@ export async function suspend(ctx: AppContext, actor: Actor, userId: number, rea
     user.suspendedReason = reason;
     user.sessionEpoch += 1;
     await m.save(user);
-    await recordAudit(m, { actorId: actor.id, action: 'user.suspended', targetType: 'user', targetId: user.id, detail: { reason }, ip: actor.ip });
+    await recordAudit(m, {
+      actorId: actor.id,
+      action: 'user.suspended',
+      targetType: 'user',
+      targetId: user.id,
+      detail: { reason },
+      ip: actor.ip,
+    });
     return user;
   });
 }
@@ -57,7 +78,13 @@ export async function reinstate(ctx: AppContext, actor: Actor, userId: number): 
     user.suspendedAt = null;
     user.suspendedReason = null;
     await m.save(user);
-    await recordAudit(m, { actorId: actor.id, action: 'user.reinstated', targetType: 'user', targetId: user.id, ip: actor.ip });
+    await recordAudit(m, {
+      actorId: actor.id,
+      action: 'user.reinstated',
+      targetType: 'user',
+      targetId: user.id,
+      ip: actor.ip,
+    });
     return user;
   });
 }

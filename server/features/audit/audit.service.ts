@@ -15,12 +15,12 @@ export interface AuditEntry {
 export async function recordAudit(manager: EntityManager, entry: AuditEntry): Promise<void> {
   await manager.save(
     manager.create(AuditEvent, {
-    actorId: entry.actorId,
-    action: entry.action,
-    targetType: entry.targetType ?? null,
-    targetId: entry.targetId === undefined ? null : String(entry.targetId),
-    detail: entry.detail ?? null,
-    ip: entry.ip ?? null,
+      actorId: entry.actorId,
+      action: entry.action,
+      targetType: entry.targetType ?? null,
+      targetId: entry.targetId === undefined ? null : String(entry.targetId),
+      detail: entry.detail ?? null,
+      ip: entry.ip ?? null,
     }),
   );
 }

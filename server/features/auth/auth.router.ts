@@ -22,10 +22,13 @@ import * as auth from './auth.service';
 /** Sign-up, e-mail confirmation, sign-in and -out, password reset. */
 export function authRouter(ctx: AppContext, passport: Authenticator): Router {
   passport.use(
-    new LocalStrategy({ usernameField: 'email', passwordField: 'password', passReqToCallback: true }, (req, _email, _password, done) => {
-      const { email, password } = input<SignInInput>(req.res!);
-      auth.authenticate(ctx, email, password, clientIp(req)).then((user) => done(null, user), done);
-    }),
+    new LocalStrategy(
+      { usernameField: 'email', passwordField: 'password', passReqToCallback: true },
+      (req, _email, _password, done) => {
+        const { email, password } = input<SignInInput>(req.res!);
+        auth.authenticate(ctx, email, password, clientIp(req)).then((user) => done(null, user), done);
+      },
+    ),
   );
 
   const router = Router();
@@ -43,13 +46,19 @@ export function authRouter(ctx: AppContext, passport: Authenticator): Router {
   });
 
   router.post('/resend-verification', validate(emailOnlySchema), async (req, res) => {
-    res.status(202).json({ message: await auth.resendVerification(ctx, input<EmailOnlyInput>(res).email, clientIp(req)) });
+    res
+      .status(202)
+      .json({ message: await auth.resendVerification(ctx, input<EmailOnlyInput>(res).email, clientIp(req)) });
   });
 
   router.post('/sign-in', validate(signInSchema), async (req, res) => {
     const user = await new Promise<Express.User>((resolve, reject) => {
       passport.authenticate('local', { session: false }, (error: unknown, found: Express.User | false) =>
-        error ? reject(error) : found ? resolve(found) : reject(new AppError(401, 'invalid_credentials', 'The e-mail address or password is not right.')),
+        error
+          ? reject(error)
+          : found
+            ? resolve(found)
+            : reject(new AppError(401, 'invalid_credentials', 'The e-mail address or password is not right.')),
       )(req, res, reject);
     });
     await logIn(req, user);
@@ -65,7 +74,9 @@ export function authRouter(ctx: AppContext, passport: Authenticator): Router {
   });
 
   router.post('/password-reset/request', validate(emailOnlySchema), async (req, res) => {
-    res.status(202).json({ message: await auth.requestPasswordReset(ctx, input<EmailOnlyInput>(res).email, clientIp(req)) });
+    res
+      .status(202)
+      .json({ message: await auth.requestPasswordReset(ctx, input<EmailOnlyInput>(res).email, clientIp(req)) });
   });
 
   router.post('/password-reset/confirm', validate(passwordResetSchema), async (req, res) => {

@@ -11,7 +11,8 @@ import { consumeToken, issueToken, retireTokens } from './one-time-tokens';
 import { hashPassword, verifyAgainstNothing, verifyPassword } from './password-hash';
 import { passwordProblem } from './password-policy';
 
-const link = (ctx: AppContext, path: string, token: string) => `${ctx.config.appOrigin}${path}?token=${encodeURIComponent(token)}`;
+const link = (ctx: AppContext, path: string, token: string) =>
+  `${ctx.config.appOrigin}${path}?token=${encodeURIComponent(token)}`;
 
 export const SIGN_UP_ANSWER = 'Check your inbox: we have sent a link to confirm your address. Open it, then sign in.';
 export const RESET_ANSWER = 'If an account uses that address, we have sent it a link to choose a new password.';
@@ -20,7 +21,11 @@ export const RESEND_ANSWER = 'If that address belongs to an account waiting for 
 const isDuplicate = (error: unknown) => (error as { code?: string } | null)?.code === 'ER_DUP_ENTRY';
 
 /** Refuse a common or personal password with a message on the named field. */
-export function assertPasswordAcceptable(field: string, password: string, context: { email: string; displayName?: string }) {
+export function assertPasswordAcceptable(
+  field: string,
+  password: string,
+  context: { email: string; displayName?: string },
+) {
   const problem = passwordProblem(password, context);
   if (problem) throw validationFailed({ [field]: problem });
 }
@@ -37,10 +42,19 @@ export async function signUp(ctx: AppContext, input: SignUpInput, ip: string): P
     await ctx.transaction(async (m) => {
       const existing = await findUserByEmail(m, input.email);
       if (existing) return tellExistingOwner(ctx, m, existing);
-      const { identifiers } = await m.insert(User, { email: input.email, displayName: input.displayName, passwordHash, role: 'member' });
+      const { identifiers } = await m.insert(User, {
+        email: input.email,
+        displayName: input.displayName,
+        passwordHash,
+        role: 'member',
+      });
       const userId = Number(identifiers[0]?.id);
       const token = await issueToken(m, userId, 'verify_email');
-      await enqueueEmail(m, input.email, mailTemplates.verifyEmail(input.displayName, link(ctx, '/verify-email', token)));
+      await enqueueEmail(
+        m,
+        input.email,
+        mailTemplates.verifyEmail(input.displayName, link(ctx, '/verify-email', token)),
+      );
       await recordAudit(m, { actorId: userId, action: 'account.created', targetType: 'user', targetId: userId, ip });
     });
   } catch (error) {
@@ -56,7 +70,11 @@ export async function signUp(ctx: AppContext, input: SignUpInput, ip: string): P
 
 async function tellExistingOwner(ctx: AppContext, m: EntityManager, owner: User): Promise<void> {
   const origin = ctx.config.appOrigin;
-  await enqueueEmail(m, owner.email, mailTemplates.alreadyRegistered(owner.displayName, `${origin}/sign-in`, `${origin}/forgot-password`));
+  await enqueueEmail(
+    m,
+    owner.email,
+    mailTemplates.alreadyRegistered(owner.displayName, `${origin}/sign-in`, `${origin}/forgot-password`),
+  );
 }
 
 export async function verifyEmail(ctx: AppContext, token: string, ip: string): Promise<string> {
@@ -66,7 +84,13 @@ export async function verifyEmail(ctx: AppContext, token: string, ip: string): P
     if (!user.emailVerifiedAt) {
       user.emailVerifiedAt = new Date();
       await m.save(user);
-      await recordAudit(m, { actorId: user.id, action: 'account.email_verified', targetType: 'user', targetId: user.id, ip });
+      await recordAudit(m, {
+        actorId: user.id,
+        action: 'account.email_verified',
+        targetType: 'user',
+        targetId: user.id,
+        ip,
+      });
     }
   });
   return 'Your e-mail address is confirmed. You can sign in now.';
@@ -100,10 +124,18 @@ export async function authenticate(ctx: AppContext, email: string, password: str
   await ctx.rateLimits.clearSignInFailures(email);
   if (user.suspendedAt) {
     ctx.logger.warn({ event: 'sign_in_suspended', userId: user.id, ip }, 'suspended account tried to sign in');
-    throw new AppError(403, 'account_suspended', `Your account is suspended: ${user.suspendedReason ?? 'no reason recorded'}. Write to the moderators if you think this is a mistake.`);
+    throw new AppError(
+      403,
+      'account_suspended',
+      `Your account is suspended: ${user.suspendedReason ?? 'no reason recorded'}. Write to the moderators if you think this is a mistake.`,
+    );
   }
   if (!user.emailVerifiedAt) {
-    throw new AppError(403, 'email_unverified', 'Confirm your e-mail address first: open the link we sent you, or ask for a new one.');
+    throw new AppError(
+      403,
+      'email_unverified',
+      'Confirm your e-mail address first: open the link we sent you, or ask for a new one.',
+    );
   }
   return user;
 }
@@ -124,13 +156,22 @@ export async function requestPasswordReset(ctx: AppContext, email: string, ip: s
     if (!user) return;
     await retireTokens(m, user.id, 'reset_password');
     const token = await issueToken(m, user.id, 'reset_password');
-    await enqueueEmail(m, user.email, mailTemplates.passwordReset(user.displayName, link(ctx, '/reset-password', token)));
+    await enqueueEmail(
+      m,
+      user.email,
+      mailTemplates.passwordReset(user.displayName, link(ctx, '/reset-password', token)),
+    );
   });
   return RESET_ANSWER;
 }
 
 /** Set a new password from an e-mailed link; ends every session of the account. */
-export async function confirmPasswordReset(ctx: AppContext, token: string, password: string, ip: string): Promise<string> {
+export async function confirmPasswordReset(
+  ctx: AppContext,
+  token: string,
+  password: string,
+  ip: string,
+): Promise<string> {
   const email = await ctx.transaction(async (m) => {
     const used = await consumeToken(m, token, 'reset_password');
     const user = await lockUser(m, used.userId);
@@ -140,7 +181,13 @@ export async function confirmPasswordReset(ctx: AppContext, token: string, passw
     user.emailVerifiedAt ??= new Date(); // the link proves the address
     await m.save(user);
     await enqueueEmail(m, user.email, mailTemplates.passwordChanged(user.displayName));
-    await recordAudit(m, { actorId: user.id, action: 'account.password_reset', targetType: 'user', targetId: user.id, ip });
+    await recordAudit(m, {
+      actorId: user.id,
+      action: 'account.password_reset',
+      targetType: 'user',
+      targetId: user.id,
+      ip,
+    });
     return user.email;
   });
   await ctx.rateLimits.clearSignInFailures(email);

@@ -34,7 +34,11 @@ export async function issueToken(
  * Use a token once: marks it used in the caller's transaction and returns it, or refuses with
  * a message that says what to do. A second use, an expired or unknown token all answer the same.
  */
-export async function consumeToken(manager: EntityManager, token: string, purpose: TokenPurpose): Promise<OneTimeToken> {
+export async function consumeToken(
+  manager: EntityManager,
+  token: string,
+  purpose: TokenPurpose,
+): Promise<OneTimeToken> {
   const repo = manager.getRepository(OneTimeToken);
   const found = await repo.findOne({
     where: { tokenHash: hashToken(token), purpose, usedAt: IsNull(), expiresAt: MoreThan(new Date()) },

@@ -26,7 +26,11 @@ export function passwordProblem(password: string, context: { email: string; disp
   }
   const localPart = context.email.split('@')[0]?.toLowerCase() ?? '';
   const name = context.displayName?.toLowerCase().replace(/\s+/g, '') ?? '';
-  if (lower.includes('benchwright') || (localPart.length >= 4 && lower.includes(localPart)) || (name.length >= 4 && lower.replace(/\s+/g, '').includes(name))) {
+  if (
+    lower.includes('benchwright') ||
+    (localPart.length >= 4 && lower.includes(localPart)) ||
+    (name.length >= 4 && lower.replace(/\s+/g, '').includes(name))
+  ) {
     return 'Your password must not contain your name, your e-mail address or the site name.';
   }
   return null;

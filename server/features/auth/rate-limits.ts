@@ -23,24 +23,52 @@ export class RateLimits {
   private readonly mailByAddress: Limiter;
 
   constructor(pool: Pool, config: Config) {
-    const common = { storeClient: pool, storeType: 'pool', dbName: config.db.database, tableName: 'rate_limits', tableCreated: true };
+    const common = {
+      storeClient: pool,
+      storeType: 'pool',
+      dbName: config.db.database,
+      tableName: 'rate_limits',
+      tableCreated: true,
+    };
     const window = config.signInLimits.windowMinutes * 60;
     const ns = config.rateLimitNamespace;
-    this.signInByAccount = new RateLimiterMySQL({ ...common, keyPrefix: `${ns}:signin:acct`, points: config.signInLimits.perAccount, duration: window });
-    this.signInByAddress = new RateLimiterMySQL({ ...common, keyPrefix: `${ns}:signin:addr`, points: config.signInLimits.perAddress, duration: window });
+    this.signInByAccount = new RateLimiterMySQL({
+      ...common,
+      keyPrefix: `${ns}:signin:acct`,
+      points: config.signInLimits.perAccount,
+      duration: window,
+    });
+    this.signInByAddress = new RateLimiterMySQL({
+      ...common,
+      keyPrefix: `${ns}:signin:addr`,
+      points: config.signInLimits.perAddress,
+      duration: window,
+    });
     this.mailByAccount = new RateLimiterMySQL({ ...common, keyPrefix: `${ns}:mail:acct`, points: 3, duration: 3600 });
-    this.mailByAddress = new RateLimiterMySQL({ ...common, keyPrefix: `${ns}:mail:addr`, points: config.signInLimits.perAddress, duration: 3600 });
+    this.mailByAddress = new RateLimiterMySQL({
+      ...common,
+      keyPrefix: `${ns}:mail:addr`,
+      points: config.signInLimits.perAddress,
+      duration: 3600,
+    });
   }
 
   /** Refuse a sign-in attempt while either counter is used up. */
   async assertSignInAllowed(email: string, address: string): Promise<void> {
-    const [byAccount, byAddress] = await Promise.all([this.signInByAccount.get(email), this.signInByAddress.get(address)]);
+    const [byAccount, byAddress] = await Promise.all([
+      this.signInByAccount.get(email),
+      this.signInByAddress.get(address),
+    ]);
     const blocked = [byAccount, byAddress].filter(
-      (res, i): res is RateLimiterRes => res !== null && res.consumedPoints >= (i === 0 ? this.signInByAccount.points : this.signInByAddress.points),
+      (res, i): res is RateLimiterRes =>
+        res !== null && res.consumedPoints >= (i === 0 ? this.signInByAccount.points : this.signInByAddress.points),
     );
     if (blocked.length) {
       const wait = Math.ceil(Math.max(...blocked.map((r) => r.msBeforeNext)) / 1000);
-      throw tooManyRequests(wait, `Too many failed sign-in attempts. Try again in ${minutesText(wait)}, or reset your password.`);
+      throw tooManyRequests(
+        wait,
+        `Too many failed sign-in attempts. Try again in ${minutesText(wait)}, or reset your password.`,
+      );
     }
   }
 

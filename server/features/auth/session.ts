@@ -7,7 +7,10 @@ import type { Config } from '../../config';
 export const SESSION_COOKIE = 'bw.sid';
 
 /** Cookie sessions stored in MariaDB, so any app server can serve any request. */
-export function createSessionMiddleware(config: Config, pool: Pool): { middleware: RequestHandler; close: () => Promise<void> } {
+export function createSessionMiddleware(
+  config: Config,
+  pool: Pool,
+): { middleware: RequestHandler; close: () => Promise<void> } {
   const MySQLStore = MySQLStoreFactory(session);
   const idleMs = config.session.idleMinutes * 60_000;
   const store = new MySQLStore(

@@ -33,7 +33,9 @@ export function healthRouter(ctx: AppContext, isShuttingDown: () => boolean): Ro
       probe(() => ctx.mailTransport.verify()),
     ]);
     const parts = { database, storage, payments, mail };
-    const down = Object.entries(parts).filter(([, state]) => !state.ok).map(([name]) => name);
+    const down = Object.entries(parts)
+      .filter(([, state]) => !state.ok)
+      .map(([name]) => name);
     const stopping = isShuttingDown();
     const status = down.length || stopping ? 'unavailable' : 'ok';
     res.setHeader('Cache-Control', 'no-store');

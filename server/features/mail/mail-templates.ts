@@ -11,7 +11,12 @@ const escapeHtml = (value: string) =>
 /** A subject is one line: any line break (header injection) becomes a space. */
 const oneLine = (value: string) => value.replace(/[\r\n]+/g, ' ').trim();
 
-function compose(subject: string, greetingName: string, paragraphs: string[], link?: { url: string; label: string }): EmailContent {
+function compose(
+  subject: string,
+  greetingName: string,
+  paragraphs: string[],
+  link?: { url: string; label: string },
+): EmailContent {
   const text = [
     `Hello ${oneLine(greetingName)},`,
     '',
@@ -32,10 +37,15 @@ function compose(subject: string, greetingName: string, paragraphs: string[], li
 
 export const mailTemplates = {
   verifyEmail: (name: string, url: string) =>
-    compose('Confirm your e-mail address for Benchwright', name, [
-      'Thanks for joining Benchwright. Open the link below to confirm this address; then you can sign in.',
-      'The link works once and expires in 48 hours. If you did not ask to join, ignore this message.',
-    ], { url, label: 'Confirm my address' }),
+    compose(
+      'Confirm your e-mail address for Benchwright',
+      name,
+      [
+        'Thanks for joining Benchwright. Open the link below to confirm this address; then you can sign in.',
+        'The link works once and expires in 48 hours. If you did not ask to join, ignore this message.',
+      ],
+      { url, label: 'Confirm my address' },
+    ),
 
   alreadyRegistered: (name: string, signInUrl: string, resetUrl: string) =>
     compose('Someone tried to join Benchwright with your address', name, [
@@ -45,10 +55,15 @@ export const mailTemplates = {
     ]),
 
   passwordReset: (name: string, url: string) =>
-    compose('Reset your Benchwright password', name, [
-      'We received a request to reset the password of your Benchwright account.',
-      'The link works once and expires in one hour. If you did not ask for it, ignore this message: your password stays as it is.',
-    ], { url, label: 'Choose a new password' }),
+    compose(
+      'Reset your Benchwright password',
+      name,
+      [
+        'We received a request to reset the password of your Benchwright account.',
+        'The link works once and expires in one hour. If you did not ask for it, ignore this message: your password stays as it is.',
+      ],
+      { url, label: 'Choose a new password' },
+    ),
 
   passwordChanged: (name: string) =>
     compose('Your Benchwright password was changed', name, [
@@ -57,10 +72,15 @@ export const mailTemplates = {
     ]),
 
   confirmNewEmail: (name: string, url: string) =>
-    compose('Confirm your new e-mail address for Benchwright', name, [
-      'You asked to use this address for your Benchwright account. Open the link to confirm it.',
-      'The link works once and expires in 24 hours. Until then your old address stays in use.',
-    ], { url, label: 'Use this address' }),
+    compose(
+      'Confirm your new e-mail address for Benchwright',
+      name,
+      [
+        'You asked to use this address for your Benchwright account. Open the link to confirm it.',
+        'The link works once and expires in 24 hours. Until then your old address stays in use.',
+      ],
+      { url, label: 'Use this address' },
+    ),
 
   emailChanged: (name: string, newEmail: string) =>
     compose('Your Benchwright e-mail address was changed', name, [

@@ -11,7 +11,8 @@ interface HttpLikeError {
 
 /** Errors thrown by libraries (body parser, CSRF check) mapped to our codes and words. */
 function fromLibrary(error: HttpLikeError): AppError | null {
-  if (error.type === 'entity.parse.failed') return new AppError(400, 'malformed_json', 'The request body is not valid JSON.');
+  if (error.type === 'entity.parse.failed')
+    return new AppError(400, 'malformed_json', 'The request body is not valid JSON.');
   if (error.type === 'entity.too.large') return new AppError(413, 'payload_too_large', 'The request is too large.');
   if (error.type === 'charset.unsupported' || error.type === 'encoding.unsupported') {
     return new AppError(415, 'unsupported_media_type', 'Send the request as UTF-8 JSON.');
@@ -37,7 +38,9 @@ export const errorHandler: ErrorRequestHandler = (error: unknown, req, res, next
   const known = error instanceof AppError ? error : fromLibrary((error ?? {}) as HttpLikeError);
   if (!known) {
     req.log?.error({ err: error }, 'unhandled error');
-    res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side. Please try again.' } });
+    res
+      .status(500)
+      .json({ error: { code: 'internal', message: 'Something went wrong on our side. Please try again.' } });
     return;
   }
   if (known.status >= 500) req.log?.error({ err: error }, known.message);

@@ -5,7 +5,9 @@ import { AppError, validationFailed } from '../errors';
 type Source = 'body' | 'query' | 'params';
 
 /** Turn zod issues into one message per field, named by the input's field name. */
-export function fieldErrors(issues: readonly { path: PropertyKey[]; code: string; message: string; keys?: string[] }[]) {
+export function fieldErrors(
+  issues: readonly { path: PropertyKey[]; code: string; message: string; keys?: string[] }[],
+) {
   const fields: Record<string, string> = {};
   for (const issue of issues) {
     if (issue.code === 'unrecognized_keys' && issue.keys) {
@@ -26,7 +28,11 @@ export function validate(schema: ZodType, source: Source = 'body'): RequestHandl
   return (req, res, next) => {
     const raw: unknown = req[source];
     if (source === 'body' && (raw === undefined || typeof raw !== 'object' || raw === null || Array.isArray(raw))) {
-      throw new AppError(415, 'unsupported_media_type', 'Send the form as a JSON object (Content-Type: application/json).');
+      throw new AppError(
+        415,
+        'unsupported_media_type',
+        'Send the form as a JSON object (Content-Type: application/json).',
+      );
     }
     const result = schema.safeParse(raw ?? {});
     if (!result.success) throw validationFailed(fieldErrors(result.error.issues));
