@@ -2,7 +2,6 @@ import 'reflect-metadata';
 import express, { type Express, type Router } from 'express';
 import helmet from 'helmet';
 import { createPool } from 'mysql2';
-import { pinoHttp } from 'pino-http';
 import type { AppContext } from './app-context';
 import type { Config } from './config';
 import { createDataSource } from './db/data-source';
@@ -21,6 +20,7 @@ import { staticClient } from './http/static-client';
 import { createLogger } from './lib/logger';
 import { createMailTransport } from './lib/mail-transport';
 import { createPayments } from './lib/payments';
+import { requestLog } from './lib/request-log';
 import { createStorage } from './lib/storage';
 
 /** A router and where it is mounted under /api; listed so tests can walk every route. */
@@ -85,7 +85,7 @@ export async function createApp(config: Config): Promise<AppInstance> {
       strictTransportSecurity: config.session.cookieSecure,
     }),
   );
-  app.use(pinoHttp({ logger, customProps: (req) => ({ userId: (req as express.Request).user?.id }) }));
+  app.use(requestLog(logger));
 
   const api = express.Router();
   const health = healthRouter(ctx, () => shuttingDown);

@@ -96,7 +96,7 @@ describe('role × route matrix', () => {
   );
 
   for (const persona of personas) {
-    it(`lets a ${persona} through exactly the routes their role allows`, async () => {
+    it(`lets ${/^[aeiou]/.test(persona) ? 'an' : 'a'} ${persona} through exactly the routes their role allows`, async () => {
       const agent = agents.get(persona)!;
       const rank = persona === 'suspended' ? 0 : RANK[persona];
       const outcomes: Record<string, number> = {};

@@ -1,5 +1,5 @@
 import type { CutNode } from './cut-tree';
-import type { GuillotineCut, Placement, Rect, SheetLayout, SheetStock } from './sheet-types';
+import type { CutOrientation, GuillotineCut, Placement, Rect, SheetLayout, SheetStock } from './sheet-types';
 
 interface PendingCut {
   cut: Omit<GuillotineCut, 'order'>;
@@ -16,7 +16,7 @@ export function toSheetLayout(root: CutNode, sheet: SheetStock): SheetLayout {
   const placements: Placement[] = [];
   const offcuts: Rect[] = [];
   const pending: PendingCut[] = [];
-  const walk = (node: CutNode, parentOrientation: string | undefined, stage: number): void => {
+  const walk = (node: CutNode, parentOrientation: CutOrientation | undefined, stage: number): void => {
     const { state, rect } = node;
     if (state.kind === 'free') offcuts.push({ ...rect });
     else if (state.kind === 'part') {

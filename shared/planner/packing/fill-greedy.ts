@@ -3,9 +3,12 @@ import type { LinearPiece, LinearProblem } from './stock-input';
 
 /** How the repeated bar fill picks each bar's stock length. */
 export interface FillStrategy {
-  /** 'ratio': the length that carries the most piece weight per unit of price (or per mm when unpriced); 'longest': always the longest. */
+  /**
+   * 'ratio': the length carrying the most piece weight per unit of price (per mm when unpriced);
+   * 'longest': always the longest length, shortened afterwards if a shorter one holds the bar.
+   */
   stock: 'ratio' | 'longest';
-  /** Put the longest remaining piece on every new bar before filling the rest, so long parts are not left to the end. */
+  /** Put the longest remaining piece on each new bar before filling the rest, so long parts are not left to the end. */
   anchored: boolean;
 }
 
@@ -24,7 +27,10 @@ export function packByBarFill(problem: LinearProblem, strategy: FillStrategy): L
     if (live.length === 0) return bars;
     const anchor = strategy.anchored ? live[0]! : undefined;
     const anchorWeight = anchor ? anchor.length + kerf : 0;
-    const counts: LengthGroup[] = live.map((g) => ({ length: g.length, count: g.pieces.length - (g === anchor ? 1 : 0) }));
+    const counts: LengthGroup[] = live.map((g) => ({
+      length: g.length,
+      count: g.pieces.length - (g === anchor ? 1 : 0),
+    }));
     const table = buildFillTable(counts, kerf, maxCapacity - anchorWeight, workspace);
 
     let chosen = { score: -Infinity, weight: 0 };

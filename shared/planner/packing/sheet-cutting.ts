@@ -8,8 +8,8 @@ const SPLITS: readonly SplitRule[] = ['shorter-leftover', 'max-area', 'rip-first
 const ORDERS: Readonly<Record<string, (a: SheetPiece, b: SheetPiece) => number>> = {
   'largest area': (a, b) => b.width * b.height - a.width * a.height || longSide(b) - longSide(a),
   'longest side': (a, b) => longSide(b) - longSide(a) || shortSide(b) - shortSide(a),
-  'widest': (a, b) => b.width - a.width || b.height - a.height,
-  'tallest': (a, b) => b.height - a.height || b.width - a.width,
+  widest: (a, b) => b.width - a.width || b.height - a.height,
+  tallest: (a, b) => b.height - a.height || b.width - a.width,
 };
 
 /**
@@ -17,8 +17,8 @@ const ORDERS: Readonly<Record<string, (a: SheetPiece, b: SheetPiece) => number>>
  *
  * Packs the parts with every combination of four sort orders, two free-piece rules and three split rules (and,
  * with several sheet sizes, each size as the one tried first), then swaps any sheet whose parts fit a cheaper
- * or smaller size. Keeps the plan that costs least, then uses fewest sheets, then least sheet area, then leaves
- * the largest offcut. Throws {@link PlannerInputError} naming a part that fits no sheet.
+ * or smaller size. Keeps the plan that costs least, then uses fewest sheets, then least sheet area, then needs
+ * fewest cuts, then leaves the largest offcut. Throws {@link PlannerInputError} naming a part that fits no sheet.
  */
 export function planSheetCutting(input: SheetCuttingInput): SheetCuttingPlan {
   const problem = toSheetProblem(input);
@@ -33,8 +33,8 @@ export function planSheetCutting(input: SheetCuttingInput): SheetCuttingPlan {
           if (!packed) continue;
           const swapped = swapToSmallerSheets(packed, problem);
           if (best && isWorseOnTotals(packed, best, problem)) continue;
-          const name = `guillotine ${fit} fit, ${split} split, ${orderName} first${swapped ? ', smaller sheets swapped in' : ''}`;
-          const plan = toSheetPlan(packed, problem, name);
+          const name = `guillotine ${fit} fit, ${split} split, ${orderName} first`;
+          const plan = toSheetPlan(packed, problem, swapped ? `${name}, smaller sheets swapped in` : name);
           if (!best || isBetterSheetPlan(plan, best)) best = plan;
         }
       }

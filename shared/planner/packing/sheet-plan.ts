@@ -23,6 +23,7 @@ export function toSheetPlan(
     wastePercent: totalSheetArea === 0 ? 0 : (100 * (totalSheetArea - usedArea)) / totalSheetArea,
     lowerBound: { sheets: Math.ceil(partsArea / (largest.width * largest.height)), area: partsArea },
     algorithm,
+    kerf: problem.kerf,
   };
   if (problem.priced) plan.costMinor = sheets.reduce((sum, s) => sum + s.priceMinor!, 0);
   return plan;
@@ -37,16 +38,16 @@ export function piecesIn(node: CutNode): SheetPiece[] {
 }
 
 /**
- * Whether `a` beats `b`: lower cost when priced, then fewer sheets, then less sheet area, then a larger best
- * offcut (waste gathered in one reusable piece), then fewer cuts.
+ * Whether `a` beats `b`: lower cost when priced, then fewer sheets, then less sheet area, then fewer saw cuts
+ * (yards often charge by the cut), then a larger best offcut (waste gathered in one reusable piece).
  */
 export function isBetterSheetPlan(a: SheetCuttingPlan, b: SheetCuttingPlan): boolean {
   const keys = (p: SheetCuttingPlan) => [
     p.costMinor ?? 0,
     p.sheetCount,
     p.totalSheetArea,
-    -largestOffcut(p),
     p.sheets.reduce((sum, s) => sum + s.cuts.length, 0),
+    -largestOffcut(p),
   ];
   const keysA = keys(a);
   const keysB = keys(b);

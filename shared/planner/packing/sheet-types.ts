@@ -100,5 +100,7 @@ export interface SheetCuttingPlan {
   lowerBound: { sheets: number; area: number };
   /** The heuristic and settings that produced this plan, for people. */
   algorithm: string;
+  /** The saw kerf the plan allows for, mm. */
+  kerf: number;
   costMinor?: number;
 }

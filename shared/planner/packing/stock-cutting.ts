@@ -39,7 +39,11 @@ export function planStockCutting(input: StockCuttingInput): StockCuttingPlan {
   let best = baseline;
   const candidates = [
     () => decreasingPlan(problem, 'best'),
-    ...FILL_STRATEGIES.map(([name, strategy]) => () => toStockPlan(packByBarFill(problem, strategy), problem, name)),
+    ...FILL_STRATEGIES.map(
+      ([name, strategy]) =>
+        () =>
+          toStockPlan(packByBarFill(problem, strategy), problem, name),
+    ),
   ];
   for (const make of candidates) {
     const plan = make();

@@ -25,6 +25,8 @@ export function toStockPlan(
     wastePercent: totalStockLength === 0 ? 0 : (100 * totalWaste) / totalStockLength,
     lowerBound: linearLowerBound(problem),
     algorithm,
+    kerf: problem.kerf,
+    trimPerStock: problem.trim,
   };
   if (problem.priced) plan.costMinor = bars.reduce((sum, b) => sum + b.priceMinor!, 0);
   return plan;

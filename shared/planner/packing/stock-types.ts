@@ -84,6 +84,9 @@ export interface StockCuttingPlan {
   wastePercent: number;
   lowerBound: StockLowerBound;
   algorithm: StockAlgorithm;
+  /** The saw kerf and end trim the plan allows for, mm. */
+  kerf: number;
+  trimPerStock: number;
   /** Total price in minor units, when the stock is priced. */
   costMinor?: number;
 }

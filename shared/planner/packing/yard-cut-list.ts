@@ -10,7 +10,7 @@ export function yardCutList(plan: SheetCuttingPlan): string[] {
   plan.sheets.forEach((layout, i) => {
     const { width, height } = layout.sheet;
     lines.push(`Sheet ${i + 1} of ${plan.sheetCount} (${width} × ${height} mm):`);
-    for (const cut of layout.cuts) lines.push(`  ${cut.order}. ${describeCut(cut, layout)}`);
+    for (const cut of layout.cuts) lines.push(`  ${cut.order}. ${describeCut(cut, layout, plan.kerf)}`);
     if (layout.cuts.length === 0) lines.push('  No cuts: use the whole sheet.');
     lines.push(`  Gives: ${describePieces(layout)}.`);
     if (layout.offcuts.length > 0) {
@@ -20,16 +20,17 @@ export function yardCutList(plan: SheetCuttingPlan): string[] {
   return lines;
 }
 
-function describeCut(cut: GuillotineCut, layout: SheetLayout): string {
+function describeCut(cut: GuillotineCut, layout: SheetLayout, kerf: number): string {
   const { sheet } = layout;
   const { piece } = cut;
   const horizontal = cut.orientation === 'horizontal';
-  const alongLongSide = horizontal === sheet.width >= sheet.height;
-  const verb = alongLongSide ? 'Rip' : 'Cross-cut';
+  const verb = horizontal === sheet.width >= sheet.height ? 'Rip' : 'Cross-cut';
   const offset = cut.position - (horizontal ? piece.y : piece.x);
-  const edge = horizontal ? 'bottom' : 'left';
   const length = cut.to - cut.from;
-  return `${verb} the ${pieceName(cut, layout)} at ${offset} mm from its ${edge} edge, across its full ${length} mm.`;
+  const sizeOf = (across: number) => (horizontal ? `${piece.width} × ${across}` : `${across} × ${piece.height}`);
+  const rest = (horizontal ? piece.height : piece.width) - offset - kerf;
+  const gives = rest > 0 ? `${sizeOf(offset)} and ${sizeOf(rest)} mm` : `${sizeOf(offset)} mm; the rest goes to dust`;
+  return `${verb} the ${pieceName(cut, layout)} at ${offset} mm (a full ${length} mm cut), giving ${gives}.`;
 }
 
 function pieceName(cut: GuillotineCut, layout: SheetLayout): string {
