@@ -113,7 +113,10 @@ function checkInput(input: BusRunsInput): void {
   for (const at of input.crossMemberPositionsMm) {
     requireFinite(at, 'Cross-member position', 'millimetres');
     if (at < 0 || at > input.boardLengthMm) {
-      throw new EngineeringInputError(`A cross member at ${at} mm is off the ${input.boardLengthMm} mm board.`, 'cross');
+      throw new EngineeringInputError(
+        `A cross member at ${at} mm is off the ${input.boardLengthMm} mm board.`,
+        'cross',
+      );
     }
   }
 }
@@ -137,7 +140,10 @@ export function busRuns(input: BusRunsInput): BusRunsPlan {
       pairLengthMm: 2 * wireLengthMm,
     })),
   ];
-  const diameterMm = roundUpTo(2 * input.wireOuterDiameterMm + (input.holeClearanceMm ?? DEFAULT_HOLE_CLEARANCE_MM), DRILL_STEP_MM);
+  const diameterMm = roundUpTo(
+    2 * input.wireOuterDiameterMm + (input.holeClearanceMm ?? DEFAULT_HOLE_CLEARANCE_MM),
+    DRILL_STEP_MM,
+  );
   const sectionMm = input.dropperSectionMm ?? DEFAULT_DROPPER_SECTION_MM;
   requirePositive(sectionMm, 'Rail section length', 'millimetres');
   const alongMm = dropperPositions(input, sectionMm);

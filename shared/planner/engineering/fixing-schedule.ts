@@ -103,6 +103,7 @@ export function fixingSchedule(input: FrameFixingInput): JointFixing[] {
     topSheet(input),
   ];
   if (input.legs !== undefined && input.legs.count > 0) schedule.push(legs(input, input.legs));
-  if (input.wallBattenCount !== undefined && input.wallBattenCount > 0) schedule.push(wallBattens(input.wallBattenCount));
+  if (input.wallBattenCount !== undefined && input.wallBattenCount > 0)
+    schedule.push(wallBattens(input.wallBattenCount));
   return schedule;
 }

@@ -25,6 +25,24 @@ export function sheetMaterial(id: SheetMaterialId): SheetMaterial {
   return SHEET_MATERIALS[id];
 }
 
+/** Stiffness and density for sag from a timber class: E0,mean and ρmean. */
+export function timberForSag(id: TimberClassId): { eNmm2: number; densityKgM3: number } {
+  const c = TIMBER_CLASSES[id];
+  return { eNmm2: c.eMeanNmm2, densityKgM3: c.densityMeanKgM3 };
+}
+
+/** Stiffness and density for sag from a sheet material; throws for one not to be left spanning (foam board). */
+export function sheetForSag(id: SheetMaterialId): { eNmm2: number; densityKgM3: number } {
+  const m = SHEET_MATERIALS[id];
+  if (m.bendingENmm2 === null) {
+    throw new EngineeringInputError(
+      `${m.name} is not for spanning between cross members; lay it on a sheet that is, and check that sheet.`,
+      'sheet material',
+    );
+  }
+  return { eNmm2: m.bendingENmm2, densityKgM3: m.densityKgM3 };
+}
+
 /** A standard section by id (e.g. "uk-2x1"); throws for an id not offered. */
 export function standardSection(id: string): TimberSection {
   const section = STANDARD_SECTIONS.find((s) => s.id === id);

@@ -39,14 +39,15 @@ function moreLegs(input: RailSagInput): SagSuggestion | undefined {
     if (!railSag({ ...input, spanMm }).passes) continue;
     const extraLegs = bays - 1;
     const legs = extraLegs === 1 ? 'leg' : 'legs';
+    const spans = `${bays} equal spans of ${Math.round(spanMm)} mm (${formatFeetInches(spanMm)})`;
     return {
       kind: 'more-legs',
       extraLegs,
       spanMm,
       maxSpanMm,
       message:
-        `Add ${extraLegs} ${legs} (or supports) under this rail, evenly spaced, so it spans ${Math.round(spanMm)} mm ` +
-        `at most (${formatFeetInches(spanMm)}); it may span up to ${maxSpanMm} mm.`,
+        `Add ${extraLegs} more ${legs} (or other supports) under this rail, evenly spaced, to make ${spans}; ` +
+        `it may span up to ${maxSpanMm} mm.`,
     };
   }
   return undefined;
@@ -56,14 +57,13 @@ function deeperSection(input: RailSagInput, candidates: readonly SectionSize[]):
   for (const section of deeperSections(input.section, candidates)) {
     const result = railSag({ ...input, section });
     if (!result.passes) continue;
-    const named = 'nominal' in section ? `${String(section.nominal)} ` : '';
+    const size = `${section.widthMm} × ${section.thicknessMm} mm`;
+    const named = 'nominal' in section ? `${String(section.nominal)} (${size})` : size;
     return {
       kind: 'deeper-section',
       section,
       deflectionMm: result.deflectionMm,
-      message:
-        `Use ${named}${section.widthMm} × ${section.thicknessMm} mm on edge for this rail: ` +
-        `it sags ${result.deflectionMm.toFixed(1)} mm.`,
+      message: `Use ${named} on edge for this rail: it sags ${result.deflectionMm.toFixed(1)} mm.`,
     };
   }
   return undefined;

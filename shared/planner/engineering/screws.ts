@@ -77,13 +77,16 @@ export function screwFor(joint: ScrewJoint): ScrewChoice {
     (l) => l >= neededMm - 1e-9 && l - fixed >= MIN_SHARE_IN_BASE * l - 1e-9,
   );
   if (lengthMm === undefined) {
-    return { ok: false, reason: `A ${fixed} mm piece needs a screw over ${Math.max(...STOCK_SCREW_LENGTHS_MM)} mm; bolt it instead.` };
+    return {
+      ok: false,
+      reason: `A piece ${fixed} mm thick needs a screw over ${Math.max(...STOCK_SCREW_LENGTHS_MM)} mm; bolt it instead.`,
+    };
   }
   if (lengthMm > fitsMm) {
     return {
       ok: false,
       reason:
-        `A ${fixed} mm piece needs a ${lengthMm} mm screw to get two-thirds of it into the base, but the base is only ` +
+        `A piece ${fixed} mm thick needs a ${lengthMm} mm screw to get two-thirds of it into the base, but the base is only ` +
         `${base} mm deep, so the point would come through. Fix from the other side, use a deeper base piece, or bolt it.`,
     };
   }

@@ -1,5 +1,5 @@
 import type { SourceStatus } from './timber-data';
-import { MM_PER_INCH } from './units-data';
+import { inchesToMm } from './units-data';
 
 /** The sheet materials offered for a baseboard's top. */
 export type SheetMaterialId = 'birch-ply' | 'softwood-ply' | 'poplar-ply' | 'mdf' | 'extruded-foam';
@@ -73,8 +73,8 @@ export const PLYWOOD_THICKNESSES_MM: readonly number[] = [3, 4, 6, 9, 12, 15, 18
 
 /** US plywood: what is sold as a nominal thickness is a little thinner. */
 export const US_PLYWOOD_THICKNESSES: readonly { nominalIn: number; actualMm: number }[] = [
-  { nominalIn: 0.5, actualMm: (15 / 32) * MM_PER_INCH }, // published: ½ in sold as 15/32 in
-  { nominalIn: 0.75, actualMm: (23 / 32) * MM_PER_INCH }, // published: ¾ in sold as 23/32 in
+  { nominalIn: 0.5, actualMm: inchesToMm(15, 32) }, // published: ½ in sold as 15/32 in
+  { nominalIn: 0.75, actualMm: inchesToMm(23, 32) }, // published: ¾ in sold as 23/32 in
 ];
 
 /** Standard full sheet sizes, long side first, in millimetres. */
@@ -84,4 +84,4 @@ export const STANDARD_SHEET_SIZES_MM: readonly { lengthMm: number; widthMm: numb
 ];
 
 /** An imperial 8 × 4 ft sheet, exactly, in millimetres. */
-export const IMPERIAL_SHEET_MM = { lengthMm: 8 * 12 * MM_PER_INCH, widthMm: 4 * 12 * MM_PER_INCH }; // published: 2438 × 1219 mm
+export const IMPERIAL_SHEET_MM = { lengthMm: inchesToMm(96), widthMm: inchesToMm(48) }; // published: 2438 × 1219 mm

@@ -67,6 +67,11 @@ export function shippingWeight(
   options: { paddingMm?: number; divisor?: number } = {},
 ): ShippingWeight {
   const packed = packedSize(board, options.paddingMm);
-  const volumetricKg = volumetricWeight(packed.lengthMm / 10, packed.widthMm / 10, packed.heightMm / 10, options.divisor);
+  const volumetricKg = volumetricWeight(
+    packed.lengthMm / 10,
+    packed.widthMm / 10,
+    packed.heightMm / 10,
+    options.divisor,
+  );
   return { packed, actualKg, volumetricKg, chargeableKg: chargeableWeight(actualKg, volumetricKg) };
 }

@@ -1,4 +1,4 @@
-import { MM_PER_INCH } from './units-data';
+import { inchesToMm } from './units-data';
 
 /** How sure a default is: a published table, recalled but not confirmed, or the trade's habit. */
 export type SourceStatus = 'published' | 'memory' | 'practice';
@@ -109,32 +109,32 @@ export const STANDARD_SECTIONS: readonly TimberSection[] = [
     id: 'us-2x2',
     nominal: '2x2',
     region: 'US',
-    widthMm: 1.5 * MM_PER_INCH, // American Softwood Lumber Standard PS 20 (1½ in), from memory
-    thicknessMm: 1.5 * MM_PER_INCH, // American Softwood Lumber Standard PS 20 (1½ in), from memory
+    widthMm: inchesToMm(3, 2), // American Softwood Lumber Standard PS 20 (1½ in), from memory
+    thicknessMm: inchesToMm(3, 2), // American Softwood Lumber Standard PS 20 (1½ in), from memory
     status: 'memory',
   },
   {
     id: 'us-1x2',
     nominal: '1x2',
     region: 'US',
-    widthMm: 1.5 * MM_PER_INCH, // American Softwood Lumber Standard PS 20 (1½ in)
-    thicknessMm: 0.75 * MM_PER_INCH, // American Softwood Lumber Standard PS 20 (¾ in)
+    widthMm: inchesToMm(3, 2), // American Softwood Lumber Standard PS 20 (1½ in)
+    thicknessMm: inchesToMm(3, 4), // American Softwood Lumber Standard PS 20 (¾ in)
     status: 'published',
   },
   {
     id: 'us-1x4',
     nominal: '1x4',
     region: 'US',
-    widthMm: 3.5 * MM_PER_INCH, // American Softwood Lumber Standard PS 20 (3½ in)
-    thicknessMm: 0.75 * MM_PER_INCH, // American Softwood Lumber Standard PS 20 (¾ in)
+    widthMm: inchesToMm(7, 2), // American Softwood Lumber Standard PS 20 (3½ in)
+    thicknessMm: inchesToMm(3, 4), // American Softwood Lumber Standard PS 20 (¾ in)
     status: 'published',
   },
   {
     id: 'us-2x4',
     nominal: '2x4',
     region: 'US',
-    widthMm: 3.5 * MM_PER_INCH, // American Softwood Lumber Standard PS 20 (3½ in)
-    thicknessMm: 1.5 * MM_PER_INCH, // American Softwood Lumber Standard PS 20 (1½ in)
+    widthMm: inchesToMm(7, 2), // American Softwood Lumber Standard PS 20 (3½ in)
+    thicknessMm: inchesToMm(3, 2), // American Softwood Lumber Standard PS 20 (1½ in)
     status: 'published',
   },
 ];

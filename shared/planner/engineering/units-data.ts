@@ -4,8 +4,8 @@ export const MM_PER_INCH = 25.4; // international yard and pound agreement, 1959
 /** Inches in one foot. */
 export const INCHES_PER_FOOT = 12; // definition of the foot, exact
 
-/** Millimetres in one foot (12 × 25.4, exact). */
-export const MM_PER_FOOT = INCHES_PER_FOOT * MM_PER_INCH;
+/** Millimetres in one foot: 12 × 25.4, exact (written out, as 12 × 25.4 in floating point is not). */
+export const MM_PER_FOOT = 304.8; // international yard and pound agreement, 1959: exact by definition
 
 /** The finest fraction of an inch a length is shown in: 1/16 in, the smallest mark on a common tape. */
 export const DEFAULT_INCH_DENOMINATOR = 16; // common practice, no source
@@ -20,6 +20,18 @@ export const MM_PER_UNIT: Readonly<Record<LengthUnit, number>> = {
   m: 1000, // SI prefix, exact
   in: MM_PER_INCH,
   ft: MM_PER_FOOT,
+};
+
+/**
+ * Millimetres per unit as a whole-number ratio [numerator, denominator], so sums of feet and inches are worked in
+ * whole numbers and divided once.
+ */
+export const MM_PER_UNIT_RATIO: Readonly<Record<LengthUnit, readonly [number, number]>> = {
+  mm: [1, 1],
+  cm: [10, 1],
+  m: [1000, 1],
+  in: [254, 10],
+  ft: [3048, 10],
 };
 
 /** The words and marks read as each unit, lower case. Primes and typographic quotes are folded to ' and " first. */
@@ -59,3 +71,8 @@ export const UNICODE_FRACTIONS: Readonly<Record<string, string>> = {
   '⅝': '5/8',
   '⅞': '7/8',
 };
+
+/** Millimetres in `numerator / denominator` inches, divided once so that e.g. ¾ in gives exactly 19.05. */
+export function inchesToMm(numerator: number, denominator = 1): number {
+  return (numerator * 254) / (denominator * 10);
+}

@@ -4,7 +4,7 @@ import {
   INCHES_PER_FOOT,
   type LengthUnit,
   MM_PER_INCH,
-  MM_PER_UNIT,
+  MM_PER_UNIT_RATIO,
   UNICODE_FRACTIONS,
   UNIT_WORDS,
 } from './units-data';
@@ -32,27 +32,36 @@ interface Term {
 
 const EXAMPLES = `762 mm, 0.762 m, 30 in or 2' 6"`;
 // A fraction (1/2), a whole number and a fraction (6 1/2 or 6-1/2), or a decimal (30, 0.762, .5).
-const NUMBER = /\s*(?:(\d+)\/(\d+)|(\d+)(?:\s+|-)(\d+)\/(\d+)|(\d+)(?:\.(\d+))?|\.(\d+))/y;
-const UNIT = /\s*([a-z]+|'|")?/y;
-const SEPARATOR = /\s*-?/y;
+const NUMBER = String.raw`\s*(?:(\d+)\/(\d+)|(\d+)(?:\s+|-)(\d+)\/(\d+)|(\d+)(?:\.(\d+))?|\.(\d+))`;
+const UNIT = String.raw`\s*([a-z]+|'|")?`;
+const SEPARATOR = String.raw`\s*-?`;
+
+/** Matches `source` exactly at `at`, returning the match and where it ends. */
+function matchAt(source: string, input: string, at: number): { match: RegExpExecArray; end: number } | undefined {
+  const pattern = new RegExp(source, 'y');
+  pattern.lastIndex = at;
+  const match = pattern.exec(input);
+  return match === null ? undefined : { match, end: pattern.lastIndex };
+}
 
 function normalise(text: string): string {
   let out = text.trim().toLowerCase();
-  out = out.replace(/[’‘′`]{2}|''/g, '"').replace(/[’‘′`]/g, "'").replace(/[”“″]/g, '"');
+  out = out
+    .replace(/[’‘′`]{2}|''/g, '"')
+    .replace(/[’‘′`]/g, "'")
+    .replace(/[”“″]/g, '"');
   for (const [glyph, fraction] of Object.entries(UNICODE_FRACTIONS)) out = out.replaceAll(glyph, ` ${fraction}`);
   return out;
 }
 
 function readUnit(input: string, at: number, original: string): { unit?: LengthUnit; end: number } {
-  UNIT.lastIndex = at;
-  const match = UNIT.exec(input);
-  const word = match?.[1];
-  if (word === undefined) return { end: at };
-  const unit = UNIT_WORDS[word];
-  if (unit === undefined) {
+  const found = matchAt(UNIT, input, at);
+  const word = found?.match[1];
+  if (found === undefined || word === undefined) return { end: at };
+  if (!Object.hasOwn(UNIT_WORDS, word)) {
     throw new LengthParseError(`"${word}" in "${original}" is not a unit we know; use mm, cm, m, in or ft.`);
   }
-  return { unit, end: UNIT.lastIndex };
+  return { unit: UNIT_WORDS[word], end: found.end };
 }
 
 function readNumber(match: RegExpExecArray): { numerator: number; denominator: number } {
@@ -69,34 +78,35 @@ function readNumber(match: RegExpExecArray): { numerator: number; denominator: n
 function readTerms(input: string, original: string): Term[] {
   const terms: Term[] = [];
   let at = 0;
-  while (at < input.length) {
-    if (terms.length > 0) {
-      SEPARATOR.lastIndex = at;
-      if (SEPARATOR.exec(input)) at = SEPARATOR.lastIndex;
+  while (!/^\s*$/.test(input.slice(at))) {
+    if (terms.length > 0) at = matchAt(SEPARATOR, input, at)?.end ?? at;
+    const found = matchAt(NUMBER, input, at);
+    if (found === undefined) {
+      throw new LengthParseError(
+        `Could not understand "${input.slice(at).trim()}" in "${original}"; write ${EXAMPLES}.`,
+      );
     }
-    NUMBER.lastIndex = at;
-    const match = NUMBER.exec(input);
-    if (!match) {
-      throw new LengthParseError(`Could not understand "${input.slice(at).trim()}" in "${original}"; write ${EXAMPLES}.`);
-    }
-    const { numerator, denominator } = readNumber(match);
+    const { numerator, denominator } = readNumber(found.match);
     if (denominator === 0 || !Number.isFinite(numerator) || !Number.isFinite(denominator)) {
-      throw new LengthParseError(`"${match[0].trim()}" in "${original}" is not a usable number.`);
+      throw new LengthParseError(`"${found.match[0].trim()}" in "${original}" is not a usable number.`);
     }
-    const { unit, end } = readUnit(input, NUMBER.lastIndex, original);
+    const { unit, end } = readUnit(input, found.end, original);
     terms.push({ text: input.slice(at, end).trim(), numerator, denominator, unit });
     at = end;
-    if (/^\s*$/.test(input.slice(at))) break;
   }
   return terms;
 }
 
-function termMm(term: Term, unit: LengthUnit): number {
-  return (term.numerator * MM_PER_UNIT[unit]) / term.denominator;
+/** A term in millimetres as a ratio of whole numbers. */
+function termRatio(term: Term, unit: LengthUnit): [number, number] {
+  const [n, d] = MM_PER_UNIT_RATIO[unit];
+  return [term.numerator * n, term.denominator * d];
 }
 
 function noUnit(term: Term, original: string): LengthParseError {
-  return new LengthParseError(`"${term.text}" in "${original}" has no unit; add mm, cm, m, in or ft (e.g. ${EXAMPLES}).`);
+  return new LengthParseError(
+    `"${term.text}" in "${original}" has no unit; add mm, cm, m, in or ft (e.g. ${EXAMPLES}).`,
+  );
 }
 
 function combine(terms: Term[], original: string, defaultUnit?: LengthUnit): number {
@@ -106,13 +116,16 @@ function combine(terms: Term[], original: string, defaultUnit?: LengthUnit): num
   if (second === undefined) {
     const unit = first.unit ?? defaultUnit;
     if (unit === undefined) throw noUnit(first, original);
-    return termMm(first, unit);
+    const [n, d] = termRatio(first, unit);
+    return n / d;
   }
   if (first.unit === undefined) throw noUnit(first, original);
   if (first.unit !== 'ft' || (second.unit !== undefined && second.unit !== 'in')) {
     throw new LengthParseError(`"${original}" mixes units; only feet followed by inches can be combined, as in 2' 6".`);
   }
-  return termMm(first, 'ft') + termMm(second, 'in');
+  const [n1, d1] = termRatio(first, 'ft');
+  const [n2, d2] = termRatio(second, 'in');
+  return (n1 * d2 + n2 * d1) / (d1 * d2);
 }
 
 /**

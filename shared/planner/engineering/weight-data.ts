@@ -24,4 +24,3 @@ export const US_DIVISOR_IN3_PER_LB = 139; // published (US, inches)
 
 /** Padding added on every side of a board when it is packed, mm. */
 export const DEFAULT_PACKING_PADDING_MM = 50; // common practice, no source
-
