@@ -12,8 +12,12 @@ import { authRouter } from './features/auth/auth.router';
 import { createPassport } from './features/auth/passport';
 import { RateLimits } from './features/auth/rate-limits';
 import { createSessionMiddleware, sessionTimeouts } from './features/auth/session';
+import { builderProfilesRouter } from './features/builders/builder-profiles.router';
 import { healthRouter } from './features/health/health.router';
+import { listingsRouter } from './features/listings/listings.router';
+import { moderationRouter } from './features/listings/moderation.router';
 import { MailDispatcher } from './features/mail/mail-dispatcher';
+import { townsRouter } from './features/towns/towns.router';
 import { csrf, sameOriginOnly } from './http/middlewares/csrf';
 import { apiNotFound, errorHandler } from './http/middlewares/error-handler';
 import { staticClient } from './http/static-client';
@@ -99,6 +103,10 @@ export async function createApp(config: Config): Promise<AppInstance> {
     ['/account', accountRouter(ctx)],
     ['/admin', adminRouter(ctx)],
     ['/audit-events', auditRouter(ctx)],
+    ['/listings', listingsRouter(ctx)],
+    ['/moderation', moderationRouter(ctx)],
+    ['/builder-profiles', builderProfilesRouter(ctx)],
+    ['/towns', townsRouter()],
   ];
   for (const [path, router] of mounts.slice(1)) api.use(path, router);
   api.use(apiNotFound);

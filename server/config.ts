@@ -39,6 +39,7 @@ const envSchema = z.object({
   SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).default(5),
   SIGN_IN_LIMIT_PER_ADDRESS: z.coerce.number().int().min(1).default(30),
   SIGN_IN_LIMIT_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+  PLANNER_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(120),
 
   S3_ENDPOINT: z.url().optional(),
   S3_REGION: z.string().default('eu-west-2'),
@@ -77,6 +78,8 @@ export interface Config {
   db: { host: string; port: number; database: string; user: string; password: string };
   session: { secret: string; idleMinutes: number; absoluteHours: number; cookieSecure: boolean };
   signInLimits: { perAccount: number; perAddress: number; windowMinutes: number };
+  /** Plans computed per address per minute by the public planner. */
+  plannerLimitPerMinute: number;
   /** Prefix for rate-limit keys, so independent app instances (tests) do not share counters. */
   rateLimitNamespace: string;
   s3: {
@@ -142,6 +145,7 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
       perAddress: e.SIGN_IN_LIMIT_PER_ADDRESS,
       windowMinutes: e.SIGN_IN_LIMIT_WINDOW_MINUTES,
     },
+    plannerLimitPerMinute: e.PLANNER_LIMIT_PER_MINUTE,
     rateLimitNamespace: 'bw',
     s3: {
       endpoint: e.S3_ENDPOINT,

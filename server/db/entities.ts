@@ -1,7 +1,20 @@
 import { AuditEvent } from '../features/audit/audit-event.entity';
 import { OneTimeToken } from '../features/auth/one-time-token.entity';
+import { BuilderProfile } from '../features/builders/builder-profile.entity';
+import { ListingDecision } from '../features/listings/listing-decision.entity';
+import { ListingReport } from '../features/listings/listing-report.entity';
+import { Listing } from '../features/listings/listing.entity';
 import { OutboundEmail } from '../features/mail/outbound-email.entity';
 import { User } from '../features/users/user.entity';
 
 /** Every entity, listed once so the data source and tests agree. */
-export const entities = [User, OneTimeToken, AuditEvent, OutboundEmail];
+export const entities = [
+  User,
+  OneTimeToken,
+  AuditEvent,
+  OutboundEmail,
+  Listing,
+  ListingDecision,
+  ListingReport,
+  BuilderProfile,
+];

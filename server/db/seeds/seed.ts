@@ -3,6 +3,7 @@ import { hashPassword } from '../../features/auth/password-hash';
 import { User } from '../../features/users/user.entity';
 import { createDataSource } from '../data-source';
 import { DEMO_ACCOUNTS } from './demo-accounts';
+import { seedDemoListings } from './demo-listings';
 
 /** `npm run db:seed`: add the demo scenario's accounts (again safely: existing ones are reset). */
 async function main(): Promise<void> {
@@ -28,6 +29,7 @@ async function main(): Promise<void> {
       );
     }
     console.log(`Seeded ${DEMO_ACCOUNTS.length} demo accounts.`);
+    console.log(`Seeded ${await seedDemoListings(dataSource)} demo listings.`);
   } finally {
     await dataSource.destroy();
   }

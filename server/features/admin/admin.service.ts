@@ -1,3 +1,4 @@
+import type { EntityManager } from 'typeorm';
 import type { AppContext } from '../../app-context';
 import { conflict } from '../../http/errors';
 import type { Role } from '../../../shared/roles';
@@ -52,23 +53,26 @@ export async function changeRole(
 
 /** Suspend: the account's sessions end at once and it cannot sign in; it is told the reason. */
 export async function suspend(ctx: AppContext, actor: Actor, userId: number, reason: string): Promise<User> {
+  return ctx.transaction((m) => suspendAccount(m, actor, userId, reason));
+}
+
+/** Suspend inside the caller's transaction (also used by moderators acting on a listing), audit-logged. */
+export async function suspendAccount(m: EntityManager, actor: Actor, userId: number, reason: string): Promise<User> {
   assertNotSelf(actor, userId, 'suspend');
-  return ctx.transaction(async (m) => {
-    const user = await lockUser(m, userId);
-    user.suspendedAt = new Date();
-    user.suspendedReason = reason;
-    user.sessionEpoch += 1;
-    await m.save(user);
-    await recordAudit(m, {
-      actorId: actor.id,
-      action: 'user.suspended',
-      targetType: 'user',
-      targetId: user.id,
-      detail: { reason },
-      ip: actor.ip,
-    });
-    return user;
+  const user = await lockUser(m, userId);
+  user.suspendedAt = new Date();
+  user.suspendedReason = reason;
+  user.sessionEpoch += 1;
+  await m.save(user);
+  await recordAudit(m, {
+    actorId: actor.id,
+    action: 'user.suspended',
+    targetType: 'user',
+    targetId: user.id,
+    detail: { reason },
+    ip: actor.ip,
   });
+  return user;
 }
 
 export async function reinstate(ctx: AppContext, actor: Actor, userId: number): Promise<User> {

@@ -21,6 +21,7 @@ export class RateLimits {
   private readonly signInByAddress: Limiter;
   private readonly mailByAccount: Limiter;
   private readonly mailByAddress: Limiter;
+  private readonly plannerByAddress: Limiter;
 
   constructor(pool: Pool, config: Config) {
     const common = {
@@ -51,6 +52,12 @@ export class RateLimits {
       points: config.signInLimits.perAddress,
       duration: 3600,
     });
+    this.plannerByAddress = new RateLimiterMySQL({
+      ...common,
+      keyPrefix: `${ns}:planner:addr`,
+      points: config.plannerLimitPerMinute,
+      duration: 60,
+    });
   }
 
   /** Refuse a sign-in attempt while either counter is used up. */
@@ -80,6 +87,11 @@ export class RateLimits {
     await this.signInByAccount.delete(email);
   }
 
+  /** The public planner: an allowance per address per minute, so one client cannot hog the server. */
+  async consumePlannerRequest(address: string): Promise<void> {
+    await consumeOrRefuse(this.plannerByAddress, address, 'Too many plans computed from your address.');
+  }
+
   /** Count a request that sends e-mail; refuse it once the hour's allowance is used. */
   async consumeMailRequest(email: string, address: string): Promise<void> {
     try {
@@ -89,6 +101,16 @@ export class RateLimits {
       const wait = Math.ceil(error.msBeforeNext / 1000);
       throw tooManyRequests(wait, `Too many requests for e-mails. Try again in ${minutesText(wait)}.`);
     }
+  }
+}
+
+async function consumeOrRefuse(limiter: Limiter, key: string, what: string): Promise<void> {
+  try {
+    await limiter.consume(key);
+  } catch (error) {
+    if (!(error instanceof RateLimiterRes)) throw error;
+    const wait = Math.ceil(error.msBeforeNext / 1000);
+    throw tooManyRequests(wait, `${what} Try again in ${minutesText(wait)}.`);
   }
 }
 

@@ -87,4 +87,55 @@ export const mailTemplates = {
       `Your Benchwright account now uses ${oneLine(newEmail)}. Messages will go there from now on.`,
       'If you did not do this, reply to this message or reset your password straight away.',
     ]),
+
+  listingApproved: (name: string, title: string, url: string) =>
+    compose(
+      `Your listing is live: ${title}`,
+      name,
+      [
+        `A moderator has checked your listing "${oneLine(title)}" and it is now listed for buyers to find.`,
+        'If you change its title, description or price, it is checked again before buyers see the change.',
+      ],
+      { url, label: 'See your listing' },
+    ),
+
+  listingSentBack: (name: string, title: string, reasons: string[], note: string, url: string) =>
+    compose(
+      `Your listing needs changes: ${title}`,
+      name,
+      [
+        `A moderator has looked at your listing "${oneLine(title)}" and sent it back for these reasons:`,
+        ...reasons.map((reason) => `• ${reason}`),
+        ...(note ? [`Note from the moderator: ${note}`] : []),
+        'Change what is needed, then submit it for review again.',
+      ],
+      { url, label: 'Open your listing' },
+    ),
+
+  listingTakenDown: (name: string, title: string, reason: string, sellerAction: 'none' | 'warn' | 'suspend') =>
+    compose(`Your listing was withdrawn: ${title}`, name, [
+      `A moderator has withdrawn your listing "${oneLine(title)}".`,
+      `Reason: ${reason}`,
+      ...(sellerAction === 'warn'
+        ? ['This is a warning: further listings that break the rules may lead to your account being suspended.']
+        : []),
+      ...(sellerAction === 'suspend'
+        ? ['Your account has been suspended for this reason, and you can no longer sign in. Reply to ask for a review.']
+        : []),
+    ]),
+
+  builderProfileApproved: (name: string, url: string) =>
+    compose(
+      'Your builder profile is approved',
+      name,
+      ['A moderator has approved your builder profile. You can now list your benchwork-building services.'],
+      { url, label: 'List a build service' },
+    ),
+
+  builderProfileDeclined: (name: string, reason: string) =>
+    compose('Your builder profile was not approved', name, [
+      'A moderator has looked at your application for a builder profile and could not approve it this time.',
+      `Reason: ${reason}`,
+      'You can change your application and apply again.',
+    ]),
 };

@@ -1,0 +1,21 @@
+import type { ModuleListingInput, ServiceListingInput } from '../../../shared/schemas/listings';
+
+/** What a module keeps in `listings.details`: the specification nobody filters on. */
+export interface ModuleDetails {
+  type: 'module';
+  levels: ModuleListingInput['levels'];
+  construction: ModuleListingInput['construction'];
+  /** Bus wire and connectors; the control system is a column. NULL when unwired. */
+  wiring: { busWireMm2: number; boardConnectors: string } | null;
+  conditionNotes: string;
+}
+
+/** What a service keeps in `listings.details`. */
+export interface ServiceDetails {
+  type: 'service';
+  builds: ServiceListingInput['builds'];
+  materialsSupplied: ServiceListingInput['materialsSupplied'];
+  rateCard: ServiceListingInput['rateCard'];
+}
+
+export type ListingDetails = ModuleDetails | ServiceDetails;

@@ -1,0 +1,112 @@
+import type { LatLon } from '../geo';
+import type { BuilderProfileState } from '../listings/builders';
+import type { ContactKind } from '../listings/contact-details';
+import type { ChecklistItem, Decision, ReportReason, SellerAction } from '../listings/moderation';
+import type { ListingState } from '../listings/states';
+import type { BuildKind, Currency, ListingKind } from '../listings/vocabulary';
+import type { ScaleGauge } from '../scales';
+import type { ChecklistAnswers } from '../schemas/listing-moderation';
+import type { ListingSort, ModuleListingInput, ServiceListingInput } from '../schemas/listings';
+import type { TownView } from './towns';
+import type { Page } from './user';
+
+type CommonInput = 'kind' | 'title' | 'description' | 'townId' | 'position' | 'currency';
+
+/** A module's specification as shown on its page. */
+export type ModuleDetailsView = Omit<ModuleListingInput, CommonInput | 'scaleId'> & { scale: ScaleGauge };
+
+/** A build service's offer as shown on its page. */
+export type ServiceDetailsView = Omit<ServiceListingInput, CommonInput>;
+
+/** A listing photo. Photos arrive in a later change; until then every listing has none. */
+export interface ListingPhotoView {
+  id: number;
+  thumbnailUrl: string;
+  displayUrl: string;
+  isCover: boolean;
+}
+
+/** A listing as anyone who may see it sees it. */
+export interface ListingView {
+  id: number;
+  kind: ListingKind;
+  state: ListingState;
+  title: string;
+  /** Plain text: show it as text, never as HTML. */
+  description: string;
+  currency: Currency;
+  seller: { id: number; displayName: string };
+  town: TownView;
+  /** Rounded to about a kilometre: never a street address. */
+  position: LatLon;
+  module: ModuleDetailsView | null;
+  service: ServiceDetailsView | null;
+  photos: ListingPhotoView[];
+  publishedAt: string | null;
+  updatedAt: string;
+  /** From the searched town, km, when the search named one. */
+  distanceKm?: number;
+}
+
+/** A moderator's decision, as the seller sees it (the moderator unnamed) or a moderator sees it. */
+export interface DecisionView {
+  decision: Decision;
+  reasons: string[];
+  note: string;
+  at: string;
+  moderator?: { id: number; displayName: string };
+  checklist?: ChecklistAnswers | null;
+  sellerAction?: SellerAction | null;
+}
+
+/** A listing as its seller and moderators see it: with its dates and the last decision. */
+export interface OwnListingView extends ListingView {
+  createdAt: string;
+  submittedAt: string | null;
+  stateChangedAt: string;
+  lastDecision: DecisionView | null;
+}
+
+/** One page of search results, with the order used and the query as understood. */
+export interface ListingSearchResult extends Page<ListingView> {
+  sort: ListingSort;
+}
+
+export interface ReportView {
+  id: number;
+  reason: ReportReason;
+  details: string;
+  reporter: { id: number; displayName: string };
+  at: string;
+}
+
+/** A spot in the text that looks like an e-mail address or phone number. */
+export interface ContactFlagView {
+  field: 'title' | 'description' | 'conditionNotes' | 'boardConnectors';
+  kind: ContactKind;
+  match: string;
+}
+
+/** One listing waiting for a moderator: for review, because of reports, or both. */
+export interface ModerationQueueItem {
+  listing: OwnListingView;
+  queuedAt: string;
+  awaitingReview: boolean;
+  reports: ReportView[];
+  checklist: { item: ChecklistItem; label: string }[];
+  flags: ContactFlagView[];
+  history: DecisionView[];
+}
+
+export interface BuilderProfileView {
+  id: number;
+  user: { id: number; displayName: string };
+  businessName: string;
+  about: string;
+  town: TownView;
+  builds: BuildKind[];
+  state: BuilderProfileState;
+  decisionNote: string | null;
+  appliedAt: string;
+  decidedAt: string | null;
+}
