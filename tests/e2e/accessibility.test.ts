@@ -67,8 +67,8 @@ describe.each([
   it('fits the page width without sideways scrolling', async () => {
     const { page } = browser;
     await page.goto(`${appUrl}/`);
-    const overflow = await page.evaluate(
-      () => document.documentElement.scrollWidth - document.documentElement.clientWidth,
+    const overflow = await page.evaluate<number>(
+      'document.documentElement.scrollWidth - document.documentElement.clientWidth',
     );
     expect(overflow).toBeLessThanOrEqual(0);
     await screenshot(page, `${name}-home`);
