@@ -14,6 +14,8 @@ import { RateLimits } from './features/auth/rate-limits';
 import { createSessionMiddleware, sessionTimeouts } from './features/auth/session';
 import { builderProfilesRouter } from './features/builders/builder-profiles.router';
 import { healthRouter } from './features/health/health.router';
+import { plannerRouter } from './features/plans/planner.router';
+import { plansRouter, sharedPlansRouter } from './features/plans/plans.router';
 import { listingsRouter } from './features/listings/listings.router';
 import { moderationRouter } from './features/listings/moderation.router';
 import { MailDispatcher } from './features/mail/mail-dispatcher';
@@ -103,6 +105,9 @@ export async function createApp(config: Config): Promise<AppInstance> {
     ['/account', accountRouter(ctx)],
     ['/admin', adminRouter(ctx)],
     ['/audit-events', auditRouter(ctx)],
+    ['/planner', plannerRouter(ctx)],
+    ['/plans', plansRouter(ctx)],
+    ['/shared-plans', sharedPlansRouter(ctx)],
     ['/listings', listingsRouter(ctx)],
     ['/moderation', moderationRouter(ctx)],
     ['/builder-profiles', builderProfilesRouter(ctx)],

@@ -5,6 +5,7 @@ import { ListingDecision } from '../features/listings/listing-decision.entity';
 import { ListingReport } from '../features/listings/listing-report.entity';
 import { Listing } from '../features/listings/listing.entity';
 import { OutboundEmail } from '../features/mail/outbound-email.entity';
+import { SavedPlan } from '../features/plans/saved-plan.entity';
 import { User } from '../features/users/user.entity';
 
 /** Every entity, listed once so the data source and tests agree. */
@@ -17,4 +18,5 @@ export const entities = [
   ListingDecision,
   ListingReport,
   BuilderProfile,
+  SavedPlan,
 ];

@@ -1,0 +1,49 @@
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  UpdateDateColumn,
+} from 'typeorm';
+import { User } from '../users/user.entity';
+
+/** A frame plan saved to a member's account; shareable read-only through an unguessable token. */
+@Entity({ name: 'saved_plans' })
+@Index('ix_saved_plans_owner', ['ownerId', 'updatedAt'])
+export class SavedPlan {
+  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
+  id: number;
+
+  @Column({ name: 'owner_id', type: 'int', unsigned: true })
+  ownerId: number;
+
+  @ManyToOne(() => User, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'owner_id', foreignKeyConstraintName: 'fk_saved_plans_owner' })
+  owner?: User;
+
+  @Column({ type: 'varchar', length: 120 })
+  name: string;
+
+  /** The planner input exactly as the planner's schema accepts it; the plan is recomputed from it. */
+  @Column({ type: 'json' })
+  input: Record<string, unknown>;
+
+  @Index('uq_saved_plans_share_token', { unique: true })
+  @Column({ name: 'share_token', type: 'char', length: 43, nullable: true })
+  shareToken: string | null;
+
+  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  createdAt: Date;
+
+  @UpdateDateColumn({
+    name: 'updated_at',
+    type: 'datetime',
+    precision: 3,
+    default: () => 'CURRENT_TIMESTAMP(3)',
+    onUpdate: 'CURRENT_TIMESTAMP(3)',
+  })
+  updatedAt: Date;
+}
