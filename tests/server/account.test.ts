@@ -3,6 +3,7 @@ import type { AppInstance } from '../../server/app';
 import { User } from '../../server/features/users/user.entity';
 import { buildUser, GOOD_PASSWORD, uniqueEmail } from '../support/factories';
 import { linkIn, waitForMail } from '../support/inbox';
+import { signedInAs } from '../support/sessions';
 import { browserLikeAgent, startTestApp, useToken } from '../support/test-app';
 
 let app: AppInstance;
@@ -10,13 +11,6 @@ beforeAll(async () => {
   app = await startTestApp();
 });
 afterAll(() => app.close());
-
-async function signedInAs(user: User) {
-  const agent = await browserLikeAgent(app);
-  const res = await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(200);
-  useToken(agent, res.body);
-  return agent;
-}
 
 describe('/api/account', () => {
   it('answers 401 to a visitor', async () => {
@@ -26,7 +20,7 @@ describe('/api/account', () => {
   });
 
   it('changes the display name', async () => {
-    const agent = await signedInAs(await buildUser(app.ctx.dataSource));
+    const agent = await signedInAs(app, await buildUser(app.ctx.dataSource));
 
     const res = await agent.patch('/api/account/profile').send({ displayName: '  Fen Junction Club  ' });
 
@@ -36,8 +30,8 @@ describe('/api/account', () => {
 
   it('changes the password, keeps this session and ends every other one', async () => {
     const user = await buildUser(app.ctx.dataSource);
-    const here = await signedInAs(user);
-    const elsewhere = await signedInAs(user);
+    const here = await signedInAs(app, user);
+    const elsewhere = await signedInAs(app, user);
 
     const res = await here
       .post('/api/account/password')
@@ -51,7 +45,7 @@ describe('/api/account', () => {
   });
 
   it('names the current-password field when it is wrong', async () => {
-    const agent = await signedInAs(await buildUser(app.ctx.dataSource));
+    const agent = await signedInAs(app, await buildUser(app.ctx.dataSource));
 
     const res = await agent
       .post('/api/account/password')
@@ -63,7 +57,7 @@ describe('/api/account', () => {
 
   it('changes the e-mail address only when the link sent to the new one is opened', async () => {
     const user = await buildUser(app.ctx.dataSource);
-    const agent = await signedInAs(user);
+    const agent = await signedInAs(app, user);
     const newEmail = uniqueEmail('moved');
 
     await agent.post('/api/account/email').send({ newEmail, currentPassword: GOOD_PASSWORD }).expect(202);

@@ -3,7 +3,8 @@ import type { AppInstance } from '../../server/app';
 import { AuditEvent } from '../../server/features/audit/audit-event.entity';
 import type { User } from '../../server/features/users/user.entity';
 import { buildUser, GOOD_PASSWORD } from '../support/factories';
-import { browserLikeAgent, startTestApp, useToken } from '../support/test-app';
+import { signedInAs } from '../support/sessions';
+import { browserLikeAgent, startTestApp } from '../support/test-app';
 
 let app: AppInstance;
 let admin: User;
@@ -13,17 +14,10 @@ beforeAll(async () => {
 });
 afterAll(() => app.close());
 
-async function signedInAs(user: User) {
-  const agent = await browserLikeAgent(app);
-  const res = await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(200);
-  useToken(agent, res.body);
-  return agent;
-}
-
 describe('/api/admin/users', () => {
   it('lists people by search text for an administrator', async () => {
     const target = await buildUser(app.ctx.dataSource, { displayName: 'Harriet Gradient' });
-    const agent = await signedInAs(admin);
+    const agent = await signedInAs(app, admin);
 
     const res = await agent.get('/api/admin/users').query({ q: target.email, pageSize: 10 });
 
@@ -33,7 +27,7 @@ describe('/api/admin/users', () => {
   });
 
   it('treats SQL wildcards in the search text as plain characters', async () => {
-    const agent = await signedInAs(admin);
+    const agent = await signedInAs(app, admin);
 
     const res = await agent.get('/api/admin/users').query({ q: "%' OR 1=1 -- _" });
 
@@ -42,14 +36,14 @@ describe('/api/admin/users', () => {
   });
 
   it('answers 403 to a moderator', async () => {
-    const agent = await signedInAs(await buildUser(app.ctx.dataSource, { role: 'moderator' }));
+    const agent = await signedInAs(app, await buildUser(app.ctx.dataSource, { role: 'moderator' }));
     const res = await agent.get('/api/admin/users');
     expect(res.status).toBe(403);
   });
 
   it('changes a role and records who, what, why and when in the audit log', async () => {
     const target = await buildUser(app.ctx.dataSource);
-    const agent = await signedInAs(admin);
+    const agent = await signedInAs(app, admin);
 
     const res = await agent
       .patch(`/api/admin/users/${target.id}/role`)
@@ -68,7 +62,7 @@ describe('/api/admin/users', () => {
   });
 
   it('refuses to change the administrator’s own role', async () => {
-    const agent = await signedInAs(admin);
+    const agent = await signedInAs(app, admin);
     const res = await agent
       .patch(`/api/admin/users/${admin.id}/role`)
       .send({ role: 'member', reason: 'Testing myself' });
@@ -77,7 +71,7 @@ describe('/api/admin/users', () => {
 
   it('requires a reason and a known role', async () => {
     const target = await buildUser(app.ctx.dataSource);
-    const agent = await signedInAs(admin);
+    const agent = await signedInAs(app, admin);
 
     const res = await agent.patch(`/api/admin/users/${target.id}/role`).send({ role: 'owner' });
 
@@ -87,8 +81,8 @@ describe('/api/admin/users', () => {
 
   it('suspends an account: its sessions end and sign-in names the reason; reinstating restores it', async () => {
     const target = await buildUser(app.ctx.dataSource);
-    const targetAgent = await signedInAs(target);
-    const agent = await signedInAs(admin);
+    const targetAgent = await signedInAs(app, target);
+    const agent = await signedInAs(app, admin);
 
     await agent
       .post(`/api/admin/users/${target.id}/suspension`)
@@ -103,13 +97,13 @@ describe('/api/admin/users', () => {
       .send({ email: target.email, password: GOOD_PASSWORD });
     expect(refused.body.error.message).toContain('Repeated misleading listings');
     await agent.delete(`/api/admin/users/${target.id}/suspension`).expect(200);
-    await signedInAs(target);
+    await signedInAs(app, target);
   });
 });
 
 describe('GET /api/audit-events', () => {
   it('shows moderators the newest events with the actor’s name', async () => {
-    const agent = await signedInAs(await buildUser(app.ctx.dataSource, { role: 'moderator' }));
+    const agent = await signedInAs(app, await buildUser(app.ctx.dataSource, { role: 'moderator' }));
 
     const res = await agent.get('/api/audit-events').query({ pageSize: 5 });
 
@@ -119,7 +113,7 @@ describe('GET /api/audit-events', () => {
   });
 
   it('answers 403 to a member', async () => {
-    const agent = await signedInAs(await buildUser(app.ctx.dataSource));
+    const agent = await signedInAs(app, await buildUser(app.ctx.dataSource));
     await agent.get('/api/audit-events').expect(403);
   });
 });

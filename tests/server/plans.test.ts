@@ -2,24 +2,15 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { AppInstance } from '../../server/app';
 import { singlePortableModule, tenByThirteenTwoLevel } from '../../shared/planner';
-import type { User } from '../../server/features/users/user.entity';
-import { buildUser, GOOD_PASSWORD } from '../support/factories';
-import { browserLikeAgent, startTestApp, useToken } from '../support/test-app';
+import { buildUser } from '../support/factories';
+import { signedInAs } from '../support/sessions';
+import { browserLikeAgent, startTestApp } from '../support/test-app';
 
 let app: AppInstance;
 beforeAll(async () => {
   app = await startTestApp();
 });
 afterAll(() => app.close());
-
-async function signedInAs(user: User) {
-  const agent = await browserLikeAgent(app);
-  useToken(
-    agent,
-    (await agent.post('/api/auth/sign-in').send({ email: user.email, password: GOOD_PASSWORD }).expect(200)).body,
-  );
-  return agent;
-}
 
 describe('POST /api/planner/plan', () => {
   it('computes a plan for a visitor, with the cutting list, weight and sag checks', async () => {
@@ -62,7 +53,7 @@ describe('POST /api/planner/plan', () => {
 
 describe('/api/plans', () => {
   it('saves, lists, reopens, renames and deletes a member’s plan', async () => {
-    const agent = await signedInAs(await buildUser(app.ctx.dataSource));
+    const agent = await signedInAs(app, await buildUser(app.ctx.dataSource));
 
     const created = await agent.post('/api/plans').send({ name: 'Loft layout', input: tenByThirteenTwoLevel });
     expect(created.status).toBe(201);
@@ -77,7 +68,7 @@ describe('/api/plans', () => {
   });
 
   it('refuses to store an input the planner would refuse, naming the field', async () => {
-    const agent = await signedInAs(await buildUser(app.ctx.dataSource));
+    const agent = await signedInAs(app, await buildUser(app.ctx.dataSource));
 
     const res = await agent
       .post('/api/plans')
@@ -88,8 +79,8 @@ describe('/api/plans', () => {
   });
 
   it('answers 404 when another member asks for, changes or deletes the plan', async () => {
-    const owner = await signedInAs(await buildUser(app.ctx.dataSource));
-    const other = await signedInAs(await buildUser(app.ctx.dataSource));
+    const owner = await signedInAs(app, await buildUser(app.ctx.dataSource));
+    const other = await signedInAs(app, await buildUser(app.ctx.dataSource));
     const { body } = await owner.post('/api/plans').send({ name: 'Private', input: singlePortableModule }).expect(201);
     const url = `/api/plans/${body.plan.id}`;
 
@@ -101,7 +92,7 @@ describe('/api/plans', () => {
   });
 
   it('shares a read-only copy by an unguessable link, and stops sharing it', async () => {
-    const owner = await signedInAs(await buildUser(app.ctx.dataSource, { displayName: 'Vera Ballast' }));
+    const owner = await signedInAs(app, await buildUser(app.ctx.dataSource, { displayName: 'Vera Ballast' }));
     const { body } = await owner.post('/api/plans').send({ name: 'Shed layout', input: singlePortableModule });
 
     const shared = await owner.post(`/api/plans/${body.plan.id}/share`).send({ shared: true }).expect(200);
