@@ -18,6 +18,8 @@ import { plannerRouter } from './features/plans/planner.router';
 import { plansRouter, sharedPlansRouter } from './features/plans/plans.router';
 import { listingsRouter } from './features/listings/listings.router';
 import { moderationRouter } from './features/listings/moderation.router';
+import { listingPhotosRouter } from './features/photos/listing-photos.router';
+import { photoFilesRouter } from './features/photos/photo-files.router';
 import { MailDispatcher } from './features/mail/mail-dispatcher';
 import { townsRouter } from './features/towns/towns.router';
 import { csrf, sameOriginOnly } from './http/middlewares/csrf';
@@ -109,6 +111,8 @@ export async function createApp(config: Config): Promise<AppInstance> {
     ['/plans', plansRouter(ctx)],
     ['/shared-plans', sharedPlansRouter(ctx)],
     ['/listings', listingsRouter(ctx)],
+    ['/listings', listingPhotosRouter(ctx)],
+    ['/photos', photoFilesRouter(ctx)],
     ['/moderation', moderationRouter(ctx)],
     ['/builder-profiles', builderProfilesRouter(ctx)],
     ['/towns', townsRouter()],

@@ -5,6 +5,7 @@ import { ListingDecision } from '../features/listings/listing-decision.entity';
 import { ListingReport } from '../features/listings/listing-report.entity';
 import { Listing } from '../features/listings/listing.entity';
 import { OutboundEmail } from '../features/mail/outbound-email.entity';
+import { ListingPhoto } from '../features/photos/listing-photo.entity';
 import { SavedPlan } from '../features/plans/saved-plan.entity';
 import { User } from '../features/users/user.entity';
 
@@ -17,6 +18,7 @@ export const entities = [
   Listing,
   ListingDecision,
   ListingReport,
+  ListingPhoto,
   BuilderProfile,
   SavedPlan,
 ];

@@ -1,10 +1,12 @@
 import { Foundation1764626400000 } from './migrations/1764626400000-foundation';
 import { SavedPlans1764713000000 } from './migrations/1764713000000-saved-plans';
 import { Listings1764800000000 } from './migrations/1764800000000-listings';
+import { ListingPhotos1764900000000 } from './migrations/1764900000000-listing-photos';
 
 /** Every migration in order; listed explicitly so they run the same under tsx, Vitest and a build. */
 export const migrations = [
   Foundation1764626400000,
   SavedPlans1764713000000,
   Listings1764800000000,
+  ListingPhotos1764900000000,
 ];

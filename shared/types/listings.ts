@@ -18,12 +18,24 @@ export type ModuleDetailsView = Omit<ModuleListingInput, CommonInput | 'scaleId'
 /** A build service's offer as shown on its page. */
 export type ServiceDetailsView = Omit<ServiceListingInput, CommonInput>;
 
-/** A listing photo. Photos arrive in a later change; until then every listing has none. */
-export interface ListingPhotoView {
+/**
+ * A listing photo: two re-encoded JPEG sizes served by Benchwright (the uploaded file is never kept). `position`
+ * counts from 1 in the seller's order; `width` and `height` are the display size's, for layout before it loads.
+ */
+export interface PhotoView {
   id: number;
-  thumbnailUrl: string;
-  displayUrl: string;
+  position: number;
   isCover: boolean;
+  thumbUrl: string;
+  displayUrl: string;
+  width: number;
+  height: number;
+}
+
+/** The answer to an upload: the new photo and all the listing's photos in order. */
+export interface PhotoUploadResult {
+  photo: PhotoView;
+  photos: PhotoView[];
 }
 
 /** A listing as anyone who may see it sees it. */
@@ -41,7 +53,8 @@ export interface ListingView {
   position: LatLon;
   module: ModuleDetailsView | null;
   service: ServiceDetailsView | null;
-  photos: ListingPhotoView[];
+  /** The cover first, then the rest in the seller's order. */
+  photos: PhotoView[];
   publishedAt: string | null;
   updatedAt: string;
   /** From the searched town, km, when the search named one. */
@@ -67,8 +80,13 @@ export interface OwnListingView extends ListingView {
   lastDecision: DecisionView | null;
 }
 
+/** A search result: the listing, and its cover's thumbnail for the result card (null when it has no photos). */
+export interface ListingSearchItem extends ListingView {
+  coverThumbUrl: string | null;
+}
+
 /** One page of search results, with the order used and the query as understood. */
-export interface ListingSearchResult extends Page<ListingView> {
+export interface ListingSearchResult extends Page<ListingSearchItem> {
   sort: ListingSort;
 }
 

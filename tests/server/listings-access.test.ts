@@ -63,7 +63,7 @@ describe('who sees a listing', () => {
       town: { name: 'Crewe', adminArea: 'England', country: 'GB' },
       position: { lat: 53.1, lon: -2.44 },
       module: { scale: { id: 'oo', ratio: 76.2, gaugeMm: 16.5 }, weightKg: 9.5, priceMinor: 18_000 },
-      photos: [],
+      photos: [{ position: 1, isCover: true, thumbUrl: expect.stringMatching(/^\/api\/photos\//) }],
     });
     expect(JSON.stringify(res.body)).not.toContain(seller.email);
     expect(res.body.listing).not.toHaveProperty('lastDecision');

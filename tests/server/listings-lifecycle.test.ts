@@ -6,6 +6,8 @@ import { Listing } from '../../server/features/listings/listing.entity';
 import type { User } from '../../server/features/users/user.entity';
 import { buildUser } from '../support/factories';
 import { buildListedListing, buildListing, moduleBody } from '../support/listing-factories';
+import { jpegPhoto } from '../support/photo-fixtures';
+import { uploadPhoto } from '../support/photo-uploads';
 import { signedInAs } from '../support/sessions';
 import { startTestApp } from '../support/test-app';
 
@@ -36,6 +38,7 @@ describe('listing lifecycle', () => {
     expect(created.status).toBe(201);
     expect(created.body.listing).toMatchObject({ state: 'draft', seller: { id: seller.id } });
     const id = created.body.listing.id as number;
+    await uploadPhoto(sellerAgent, id, await jpegPhoto()).expect(201);
 
     const submitted = await sellerAgent.post(`/api/listings/${id}/submit`).send({});
     expect(submitted.status).toBe(200);

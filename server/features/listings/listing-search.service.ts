@@ -2,8 +2,9 @@ import type { AppContext } from '../../app-context';
 import type { ListingSearchQuery } from '../../../shared/schemas/listings';
 import type { ListingSearchResult } from '../../../shared/types/listings';
 import { validationFailed } from '../../http/errors';
+import { photosByListing } from '../photos/listing-photos.repository';
 import { gazetteer } from '../towns/gazetteer';
-import { presentListing } from './listing.presenter';
+import { presentSearchItem } from './listing.presenter';
 import { listingsInOrder } from './listing.repository';
 import { buildSearchSql } from './search-sql';
 import { splitSearchText } from './search-text';
@@ -33,11 +34,15 @@ export async function searchListings(ctx: AppContext, query: ListingSearchQuery)
     m,
     rows.map((r) => Number(r.id)),
   );
+  const photos = await photosByListing(
+    m,
+    listings.map((l) => l.id),
+  );
   const distances = new Map(
     rows.map((r) => [Number(r.id), r.distance_km === null ? undefined : Number(r.distance_km)]),
   );
   return {
-    items: listings.map((l) => presentListing(l, towns, distances.get(l.id))),
+    items: listings.map((l) => presentSearchItem(l, towns, photos.get(l.id) ?? [], distances.get(l.id))),
     total: Number(counted[0]?.total ?? 0),
     page: query.page,
     pageSize: query.pageSize,

@@ -37,8 +37,8 @@ const decimalNumber: ValueTransformer = {
 
 /**
  * A module or build-service listing. Columns hold what search filters on; `details` holds the rest of the
- * specification, and `endProfiles` the joining profile of each end. Photos belong in their own table
- * (`listing_photos`, keyed by `listing_id`), added with the photo uploads.
+ * specification, and `endProfiles` the joining profile of each end. Photos are rows of `listing_photos`
+ * (see ListingPhoto).
  */
 @Entity({ name: 'listings' })
 @Index('ft_listings_text', ['title', 'description'], { fulltext: true })

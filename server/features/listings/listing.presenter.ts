@@ -1,5 +1,7 @@
-import type { DecisionView, ListingView, OwnListingView } from '../../../shared/types/listings';
+import type { DecisionView, ListingSearchItem, ListingView, OwnListingView } from '../../../shared/types/listings';
 import type { TownView } from '../../../shared/types/towns';
+import type { ListingPhoto } from '../photos/listing-photo.entity';
+import { presentGallery } from '../photos/photo.presenter';
 import { presentTown, type Gazetteer } from '../towns/gazetteer';
 import type { User } from '../users/user.entity';
 import type { ListingDecision } from './listing-decision.entity';
@@ -14,8 +16,13 @@ function townOf(l: Listing, towns: Gazetteer): TownView {
   return { id: l.townId, name: 'Unknown town', adminArea: '', country: 'GB', lat: l.latitude, lon: l.longitude };
 }
 
-/** A listing as anyone allowed to see it sees it. Never the seller's e-mail or moderation notes. */
-export function presentListing(l: WithOwner, towns: Gazetteer, distanceKm?: number): ListingView {
+/** A listing as anyone allowed to see it sees it, with its photos. Never the seller's e-mail or moderation notes. */
+export function presentListing(
+  l: WithOwner,
+  towns: Gazetteer,
+  photos: readonly ListingPhoto[],
+  distanceKm?: number,
+): ListingView {
   return {
     id: l.id,
     kind: l.kind,
@@ -28,11 +35,22 @@ export function presentListing(l: WithOwner, towns: Gazetteer, distanceKm?: numb
     position: { lat: l.latitude, lon: l.longitude },
     module: moduleDetailsOf(l),
     service: serviceDetailsOf(l),
-    photos: [],
+    photos: presentGallery(photos),
     publishedAt: l.publishedAt?.toISOString() ?? null,
     updatedAt: l.updatedAt.toISOString(),
     ...(distanceKm === undefined ? {} : { distanceKm: Math.round(distanceKm * 10) / 10 }),
   };
+}
+
+/** A search result: the listing and its cover's thumbnail. */
+export function presentSearchItem(
+  l: WithOwner,
+  towns: Gazetteer,
+  photos: readonly ListingPhoto[],
+  distanceKm?: number,
+): ListingSearchItem {
+  const view = presentListing(l, towns, photos, distanceKm);
+  return { ...view, coverThumbUrl: view.photos[0]?.thumbUrl ?? null };
 }
 
 /** A decision; the moderator is named, and the checklist shown, only to moderators. */
@@ -56,11 +74,12 @@ export function presentDecision(d: ListingDecision, forModerator: boolean): Deci
 export function presentOwnListing(
   l: WithOwner,
   towns: Gazetteer,
+  photos: readonly ListingPhoto[],
   lastDecision: ListingDecision | undefined,
   forModerator = false,
 ): OwnListingView {
   return {
-    ...presentListing(l, towns),
+    ...presentListing(l, towns, photos),
     createdAt: l.createdAt.toISOString(),
     submittedAt: l.submittedAt?.toISOString() ?? null,
     stateChangedAt: l.stateChangedAt.toISOString(),

@@ -5,6 +5,7 @@ import type { ListingView, OwnListingView } from '../../../shared/types/listings
 import type { Page } from '../../../shared/types/user';
 import { validationFailed } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
+import { photosByListing, photosOfListing } from '../photos/listing-photos.repository';
 import { gazetteer } from '../towns/gazetteer';
 import type { ListingActor } from './listing-actor';
 import { moveListing, refusedEdit } from './listing-lifecycle';
@@ -18,9 +19,10 @@ import { Listing } from './listing.entity';
 /** What the seller and moderators see; everyone else gets the public view. */
 async function viewFor(ctx: AppContext, viewer: ListingActor | null, listing: Listing): Promise<ListingView> {
   const towns = await gazetteer();
-  if (!isSeller(viewer, listing) && !isModerator(viewer)) return presentListing(listing, towns);
+  const photos = await photosOfListing(ctx.dataSource.manager, listing.id);
+  if (!isSeller(viewer, listing) && !isModerator(viewer)) return presentListing(listing, towns, photos);
   const decisions = await latestDecisions(ctx.dataSource.manager, [listing.id]);
-  return presentOwnListing(listing, towns, decisions.get(listing.id), isModerator(viewer));
+  return presentOwnListing(listing, towns, photos, decisions.get(listing.id), isModerator(viewer));
 }
 
 /** A new listing starts as a draft that only its seller (and moderators) can see. */
@@ -115,15 +117,10 @@ export async function myListings(
     m,
     rows.map((r) => r.id),
   );
-  const [towns, decisions] = await Promise.all([
-    gazetteer(),
-    latestDecisions(
-      m,
-      listings.map((l) => l.id),
-    ),
-  ]);
+  const ids = listings.map((l) => l.id);
+  const [towns, decisions, photos] = await Promise.all([gazetteer(), latestDecisions(m, ids), photosByListing(m, ids)]);
   return {
-    items: listings.map((l) => presentOwnListing(l, towns, decisions.get(l.id))),
+    items: listings.map((l) => presentOwnListing(l, towns, photos.get(l.id) ?? [], decisions.get(l.id))),
     total,
     page: query.page,
     pageSize: query.pageSize,

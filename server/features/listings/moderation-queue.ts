@@ -4,6 +4,7 @@ import { CHECKLIST_ITEMS, CHECKLIST_LABELS } from '../../../shared/listings/mode
 import type { ModerationQueueQuery } from '../../../shared/schemas/listing-moderation';
 import type { ContactFlagView, ModerationQueueItem } from '../../../shared/types/listings';
 import type { Page } from '../../../shared/types/user';
+import { photosByListing } from '../photos/listing-photos.repository';
 import { gazetteer } from '../towns/gazetteer';
 import { ListingDecision } from './listing-decision.entity';
 import type { ModuleDetails } from './listing-details';
@@ -47,9 +48,10 @@ export async function moderationQueue(
   )) as { id: number; queued_at: Date }[];
   const [{ total }] = (await m.query(`SELECT COUNT(*) AS total ${FROM}`)) as [{ total: number | string }];
   const ids = rows.map((r) => Number(r.id));
-  const [listings, towns, reports, decisions] = await Promise.all([
+  const [listings, towns, photos, reports, decisions] = await Promise.all([
     listingsInOrder(m, ids),
     gazetteer(),
+    photosByListing(m, ids),
     ids.length
       ? m
           .getRepository(ListingReport)
@@ -73,7 +75,7 @@ export async function moderationQueue(
   const items = listings.map((l): ModerationQueueItem => {
     const history = decisions.filter((d) => d.listingId === l.id);
     return {
-      listing: presentOwnListing(l, towns, history.at(-1), true),
+      listing: presentOwnListing(l, towns, photos.get(l.id) ?? [], history.at(-1), true),
       queuedAt: queuedAt.get(l.id)!.toISOString(),
       awaitingReview: l.state === 'awaiting_review',
       reports: reports

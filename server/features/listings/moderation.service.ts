@@ -2,6 +2,7 @@ import type { EntityManager } from 'typeorm';
 import type { AppContext } from '../../app-context';
 import { hasAnyRole } from '../../../shared/roles';
 import { SEND_BACK_REASON_LABELS } from '../../../shared/listings/moderation';
+import { canMove } from '../../../shared/listings/states';
 import type {
   ApproveInput,
   DismissReportsInput,
@@ -13,10 +14,11 @@ import { suspendAccount } from '../admin/admin.service';
 import { recordAudit } from '../audit/audit.service';
 import { enqueueEmail } from '../mail/mail-outbox';
 import { mailTemplates } from '../mail/mail-templates';
+import { assertHasPhotos } from '../photos/photo-rules';
 import type { User } from '../users/user.entity';
 import type { ListingActor } from './listing-actor';
 import { ListingDecision } from './listing-decision.entity';
-import { moveListing, type MoveActor } from './listing-lifecycle';
+import { moveListing, refusedMove, type MoveActor } from './listing-lifecycle';
 import { ListingReport } from './listing-report.entity';
 import type { Listing } from './listing.entity';
 import { lockListing } from './listing.repository';
@@ -51,10 +53,12 @@ async function recordDecision(
   return decision;
 }
 
-/** Approve a listing awaiting review: it is listed, and the seller hears so. */
+/** Approve a listing awaiting review that has a photo: it is listed, and the seller hears so. */
 export async function approveListing(ctx: AppContext, actor: ListingActor, id: number, input: ApproveInput) {
   await ctx.transaction(async (m) => {
     const listing = await lockForDecision(m, actor, id);
+    if (!canMove(listing.state, 'approve')) throw refusedMove(listing.state, 'approve');
+    await assertHasPhotos(m, id);
     await moveListing(m, listing, 'approve', asModerator(actor));
     await recordDecision(m, actor, listing, {
       decision: 'approved',
