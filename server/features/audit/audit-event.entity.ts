@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { CreatedAtColumn } from '../../db/columns';
 import { User } from '../users/user.entity';
 
 /** One recorded decision or security event: who did what to which record, when and from where. */
@@ -31,6 +32,6 @@ export class AuditEvent {
   ip: string | null;
 
   @Index('ix_audit_events_created_at')
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt: Date;
 }

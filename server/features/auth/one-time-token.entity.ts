@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { CreatedAtColumn } from '../../db/columns';
 import { User } from '../users/user.entity';
 
 export const TOKEN_PURPOSES = ['verify_email', 'reset_password', 'change_email'] as const;
@@ -34,6 +35,6 @@ export class OneTimeToken {
   @Column({ name: 'used_at', type: 'datetime', precision: 3, nullable: true })
   usedAt: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt: Date;
 }

@@ -1,13 +1,5 @@
-import {
-  Column,
-  CreateDateColumn,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  UpdateDateColumn,
-} from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { CreatedAtColumn, UpdatedAtColumn } from '../../db/columns';
 import { BUILDER_PROFILE_STATES, type BuilderProfileState } from '../../../shared/listings/builders';
 import type { BuildKind } from '../../../shared/listings/vocabulary';
 import { User } from '../users/user.entity';
@@ -55,15 +47,9 @@ export class BuilderProfile {
   @Column({ name: 'decision_note', type: 'varchar', length: 500, nullable: true })
   decisionNote: string | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt: Date;
 
-  @UpdateDateColumn({
-    name: 'updated_at',
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
+  @UpdatedAtColumn()
   updatedAt: Date;
 }

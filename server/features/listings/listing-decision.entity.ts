@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { CreatedAtColumn } from '../../db/columns';
 import { DECISIONS, SELLER_ACTIONS, type Decision, type SellerAction } from '../../../shared/listings/moderation';
 import type { ChecklistAnswers } from '../../../shared/schemas/listing-moderation';
 import { User } from '../users/user.entity';
@@ -41,6 +42,6 @@ export class ListingDecision {
   @Column({ name: 'seller_action', type: 'enum', enum: SELLER_ACTIONS, nullable: true })
   sellerAction: SellerAction | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt: Date;
 }

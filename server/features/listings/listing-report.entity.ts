@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { CreatedAtColumn } from '../../db/columns';
 import { REPORT_REASONS, type ReportReason } from '../../../shared/listings/moderation';
 import { User } from '../users/user.entity';
 import { ListingDecision } from './listing-decision.entity';
@@ -43,6 +44,6 @@ export class ListingReport {
   @JoinColumn({ name: 'resolved_by_decision_id', foreignKeyConstraintName: 'fk_listing_reports_decision' })
   resolvedBy?: ListingDecision | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt: Date;
 }

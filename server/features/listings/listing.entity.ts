@@ -1,14 +1,5 @@
-import {
-  Column,
-  CreateDateColumn,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  UpdateDateColumn,
-  type ValueTransformer,
-} from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type ValueTransformer } from 'typeorm';
+import { CreatedAtColumn, UpdatedAtColumn } from '../../db/columns';
 import { LISTING_STATES, type ListingState } from '../../../shared/listings/states';
 import {
   CONDITIONS,
@@ -157,15 +148,9 @@ export class Listing {
   @Column({ name: 'state_changed_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
   stateChangedAt: Date;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt: Date;
 
-  @UpdateDateColumn({
-    name: 'updated_at',
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
+  @UpdatedAtColumn()
   updatedAt: Date;
 }

@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { CreatedAtColumn } from '../../db/columns';
 
 export const EMAIL_STATES = ['pending', 'sent', 'failed'] as const;
 export type EmailState = (typeof EMAIL_STATES)[number];
@@ -41,6 +42,6 @@ export class OutboundEmail {
   @Column({ name: 'sent_at', type: 'datetime', precision: 3, nullable: true })
   sentAt: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt: Date;
 }

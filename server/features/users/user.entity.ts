@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { CreatedAtColumn, UpdatedAtColumn } from '../../db/columns';
 import { ROLES, type Role } from '../../../shared/roles';
 
 /** A Benchwright account. Every account can buy and sell; `role` adds builder, moderator or admin rights. */
@@ -36,15 +37,9 @@ export class User {
   @Column({ name: 'last_sign_in_at', type: 'datetime', precision: 3, nullable: true })
   lastSignInAt: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
+  @CreatedAtColumn()
   createdAt: Date;
 
-  @UpdateDateColumn({
-    name: 'updated_at',
-    type: 'datetime',
-    precision: 3,
-    default: () => 'CURRENT_TIMESTAMP(3)',
-    onUpdate: 'CURRENT_TIMESTAMP(3)',
-  })
+  @UpdatedAtColumn()
   updatedAt: Date;
 }
