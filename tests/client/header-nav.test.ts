@@ -25,22 +25,54 @@ describe('the header menu', () => {
     setActivePinia(createPinia());
   });
 
-  it('offers a visitor sign in and join', () => {
-    expect(labels(mountNavFor(null))).toEqual(['Sign in', 'Join']);
+  it('offers a visitor the search, the frame planner, sign in and join', () => {
+    expect(labels(mountNavFor(null))).toEqual(['Find modules', 'Frame planner', 'Sign in', 'Join']);
   });
 
-  it('offers a member their account and signing out, and names them', () => {
+  it('offers a member selling, their listings, their plans, their account and signing out, and names them', () => {
     const wrapper = mountNavFor('member');
 
-    expect(labels(wrapper)).toEqual(['My account', 'Sign out']);
+    expect(labels(wrapper)).toEqual([
+      'Find modules',
+      'Frame planner',
+      'Sell a module',
+      'Signed in as Ada Siding',
+      'My listings',
+      'My plans',
+      'My account',
+      'Sign out',
+    ]);
     expect(wrapper.text()).toContain('Signed in as Ada Siding');
   });
 
-  it('adds the audit trail for a moderator', () => {
-    expect(labels(mountNavFor('moderator'))).toEqual(['Audit trail', 'My account', 'Sign out']);
+  it('adds the review desk and the audit trail for a moderator', () => {
+    expect(labels(mountNavFor('moderator'))).toEqual([
+      'Find modules',
+      'Frame planner',
+      'Sell a module',
+      'Signed in as Ada Siding',
+      'My listings',
+      'Review desk',
+      'Audit trail',
+      'My plans',
+      'My account',
+      'Sign out',
+    ]);
   });
 
-  it('adds the audit trail and people & roles for an administrator', () => {
-    expect(labels(mountNavFor('admin'))).toEqual(['Audit trail', 'People & roles', 'My account', 'Sign out']);
+  it('adds people & roles for an administrator', () => {
+    expect(labels(mountNavFor('admin'))).toEqual([
+      'Find modules',
+      'Frame planner',
+      'Sell a module',
+      'Signed in as Ada Siding',
+      'My listings',
+      'Review desk',
+      'Audit trail',
+      'People & roles',
+      'My plans',
+      'My account',
+      'Sign out',
+    ]);
   });
 });

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { buildUser, GOOD_PASSWORD, uniqueEmail } from '../support/factories';
+import type { Page } from 'playwright-core';
 import { linkIn, waitForMail } from '../support/inbox';
 import { openBrowser, screenshot, type BrowserSession } from '../support/browser';
 import { applyTestEnv, testConfig } from '../support/test-env';
@@ -7,6 +8,13 @@ import { createDataSource } from '../../server/db/data-source';
 import type { DataSource } from 'typeorm';
 
 const appUrl = inject('appUrl');
+
+/** The signed-in links and sign-out sit in the menu under the person's name. */
+async function openAccountMenu(page: Page): Promise<void> {
+  const button = page.getByRole('navigation', { name: 'Main' }).getByRole('button', { name: /^Signed in as/ });
+  await button.waitFor();
+  if ((await button.getAttribute('aria-expanded')) !== 'true') await button.click();
+}
 let browser: BrowserSession;
 let dataSource: DataSource;
 
@@ -48,11 +56,13 @@ describe('joining Benchwright in the browser', () => {
     await page.getByRole('button', { name: 'Sign in' }).click();
 
     const nav = page.getByRole('navigation', { name: 'Main' });
+    await openAccountMenu(page);
     await nav.getByRole('link', { name: 'My account' }).waitFor();
     expect(await nav.getByRole('link', { name: 'People & roles' }).count()).toBe(0);
     expect(await nav.getByRole('link', { name: 'Audit trail' }).count()).toBe(0);
     await screenshot(page, 'member-signed-in');
 
+    await openAccountMenu(page);
     await nav.getByRole('button', { name: 'Sign out' }).click();
     await nav.getByRole('link', { name: 'Sign in' }).waitFor();
     await page.goto(`${appUrl}/account`);
@@ -68,9 +78,11 @@ describe('joining Benchwright in the browser', () => {
     await page.getByLabel('Password', { exact: true }).fill(GOOD_PASSWORD);
     await page.getByRole('button', { name: 'Sign in' }).click();
     const nav = page.getByRole('navigation', { name: 'Main' });
+    await openAccountMenu(page);
     await nav.getByRole('link', { name: 'People & roles' }).click();
     await page.getByRole('table').getByText(admin.email).waitFor();
     await screenshot(page, 'admin-people');
+    await openAccountMenu(page);
     await nav.getByRole('button', { name: 'Sign out' }).click();
     await nav.getByRole('link', { name: 'Sign in' }).waitFor();
 
@@ -79,9 +91,11 @@ describe('joining Benchwright in the browser', () => {
     await page.getByLabel('E-mail address').fill(member.email);
     await page.getByLabel('Password', { exact: true }).fill(GOOD_PASSWORD);
     await page.getByRole('button', { name: 'Sign in' }).click();
+    await openAccountMenu(page);
     await nav.getByRole('link', { name: 'My account' }).waitFor();
     await page.goto(`${appUrl}/admin/people`);
     await page.waitForURL(/forbidden|\/$/);
+    await openAccountMenu(page);
     await nav.getByRole('button', { name: 'Sign out' }).click();
   });
 
