@@ -42,7 +42,7 @@ describe.each([
   });
   afterAll(() => browser?.close());
 
-  it.each(['/', '/sign-in', '/join', '/forgot-password', '/no-such-page'])(
+  it.each(['/', '/modules', '/planner', '/sign-in', '/join', '/forgot-password', '/no-such-page'])(
     'has no WCAG 2.2 AA violation that axe can find on %s',
     async (path) => {
       await browser.page.goto(`${appUrl}${path}`);
@@ -51,11 +51,11 @@ describe.each([
     },
   );
 
-  it('has no WCAG 2.2 AA violation on the account, people and audit pages of an administrator', async () => {
+  it('has no WCAG 2.2 AA violation on the signed-in pages of an administrator', async () => {
     const admin = await buildUser(dataSource, { role: 'admin', displayName: 'Ursula Axle' });
     const { page } = browser;
     await signIn(page, admin.email);
-    for (const path of ['/account', '/admin/people', '/audit']) {
+    for (const path of ['/account', '/admin/people', '/audit', '/sell', '/my/listings', '/review', '/plans']) {
       await page.goto(`${appUrl}${path}`);
       await page.locator('main h1').first().waitFor();
       await page.getByText(/Loading/).waitFor({ state: 'detached' });
