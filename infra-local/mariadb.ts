@@ -4,7 +4,7 @@ import { accessSync, appendFileSync, constants, existsSync, mkdirSync, rmSync } 
 import os from 'node:os';
 import path from 'node:path';
 import mysql from 'mysql2/promise';
-import { databaseName, DB_USER, HOST, PORTS } from './profile';
+import { databaseNames, DB_USER, HOST, PORTS } from './profile';
 import { portAnswers } from './processes';
 import type { LocalSecrets } from './secrets';
 import { serviceIdentity, type ServiceDefinition, type UpContext } from './service';
@@ -114,17 +114,21 @@ export function mariadbService(ctx: UpContext, secrets: LocalSecrets): ServiceDe
       }
     },
     async configure() {
-      const database = databaseName(ctx.profile);
+      const databases = databaseNames(ctx.profile);
       const connection = await connectAsRoot(port);
       try {
-        await connection.query(
-          `CREATE DATABASE IF NOT EXISTS \`${database}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,
-        );
+        for (const database of databases) {
+          await connection.query(
+            `CREATE DATABASE IF NOT EXISTS \`${database}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,
+          );
+        }
         for (const host of ['127.0.0.1', 'localhost']) {
           // ALTER as well as CREATE: a regenerated secrets.json must win over an old password.
           await connection.query('CREATE USER IF NOT EXISTS ?@? IDENTIFIED BY ?', [DB_USER, host, secrets.dbPassword]);
           await connection.query('ALTER USER ?@? IDENTIFIED BY ?', [DB_USER, host, secrets.dbPassword]);
-          await connection.query(`GRANT ALL PRIVILEGES ON \`${database}\`.* TO ?@?`, [DB_USER, host]);
+          for (const database of databases) {
+            await connection.query(`GRANT ALL PRIVILEGES ON \`${database}\`.* TO ?@?`, [DB_USER, host]);
+          }
         }
       } finally {
         await connection.end();

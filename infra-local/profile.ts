@@ -37,6 +37,14 @@ export function databaseName(profile: Profile): string {
   return profile === 'dev' ? 'benchwright' : 'benchwright_test';
 }
 
+/** The test profile's second database: `npm run bench` fills it with 20,000 listings, apart from the tests' data. */
+export const BENCH_DATABASE = 'benchwright_bench';
+
+/** Every database a profile's MariaDB holds: the app's, and for the test profile the benchmark's too. */
+export function databaseNames(profile: Profile): string[] {
+  return profile === 'test' ? [databaseName(profile), BENCH_DATABASE] : [databaseName(profile)];
+}
+
 export function appOrigin(profile: Profile): string {
   return `http://${HOST}:${PORTS[profile].app}`;
 }

@@ -2,6 +2,7 @@ import { Foundation1764626400000 } from './migrations/1764626400000-foundation';
 import { SavedPlans1764713000000 } from './migrations/1764713000000-saved-plans';
 import { Listings1764800000000 } from './migrations/1764800000000-listings';
 import { ListingPhotos1764900000000 } from './migrations/1764900000000-listing-photos';
+import { ListingsDistanceIndex1765000000000 } from './migrations/1765000000000-listings-distance-index';
 
 /** Every migration in order; listed explicitly so they run the same under tsx, Vitest and a build. */
 export const migrations = [
@@ -9,4 +10,5 @@ export const migrations = [
   SavedPlans1764713000000,
   Listings1764800000000,
   ListingPhotos1764900000000,
+  ListingsDistanceIndex1765000000000,
 ];

@@ -45,6 +45,17 @@ describe('GET /api/listings sorting and pages', () => {
     }
     expect(pages).toEqual(idsOf('euro', 'service', 'frame', 'halt', 'station', 'terminus'));
   });
+
+  it('reports the same total on every page when sorting by relevance or distance, even past the last page', async () => {
+    for (const sort of ['relevance', 'distance'])
+      for (const page of [1, 2, 5]) {
+        const query = { q: fixture.mark, sort, pageSize: 4, page, town: fixture.listings.terminus.townId };
+        const res = await visitor.get('/api/listings').query(query);
+        expect(res.status, JSON.stringify(res.body)).toBe(200);
+        expect(res.body.items).toHaveLength([4, 2, 0][[1, 2, 5].indexOf(page)]!);
+        expect(res.body.total).toBe(6);
+      }
+  });
 });
 
 describe('search words', () => {

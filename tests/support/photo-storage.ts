@@ -1,18 +1,23 @@
-import { GetObjectCommand, ListObjectsV2Command } from '@aws-sdk/client-s3';
+import { GetObjectCommand, ListObjectsCommand } from '@aws-sdk/client-s3';
 import type { AppInstance } from '../../server/app';
 
-/** Every object under `listings/` in the photo bucket, sorted. */
+/**
+ * Every object under `listings/` in the photo bucket, sorted. Pages by the last key seen (ListObjects, version 1):
+ * the local S3 server signs version 2 continuation tokens with DES, which Node's OpenSSL 3 refuses, so a bucket of
+ * more than 1,000 objects could not be listed to the end that way.
+ */
 export async function photoObjects(app: AppInstance): Promise<string[]> {
   const keys: string[] = [];
-  let token: string | undefined;
-  do {
+  let marker: string | undefined;
+  for (;;) {
     const page = await app.ctx.storage.send(
-      new ListObjectsV2Command({ Bucket: app.ctx.config.s3.bucket, Prefix: 'listings/', ContinuationToken: token }),
+      new ListObjectsCommand({ Bucket: app.ctx.config.s3.bucket, Prefix: 'listings/', Marker: marker }),
     );
-    keys.push(...(page.Contents ?? []).map((o) => o.Key!));
-    token = page.IsTruncated ? page.NextContinuationToken : undefined;
-  } while (token);
-  return keys.sort();
+    const batch = (page.Contents ?? []).map((o) => o.Key!);
+    keys.push(...batch);
+    if (!page.IsTruncated || batch.length === 0) return keys.sort();
+    marker = batch[batch.length - 1];
+  }
 }
 
 /** One stored object's bytes and type. */

@@ -1,186 +1,125 @@
-import type { DataSource } from 'typeorm';
-import type { z } from 'zod';
-import type { ListingState } from '../../../shared/listings/states';
+import type { AppContext } from '../../app-context';
+import { CHECKLIST_ITEMS } from '../../../shared/listings/moderation';
+import { EDITABLE_LISTING_STATES, type ListingMove, type ListingState } from '../../../shared/listings/states';
+import { approveSchema, sendBackSchema } from '../../../shared/schemas/listing-moderation';
 import { listingInputSchema } from '../../../shared/schemas/listings';
-import { BuilderProfile } from '../../features/builders/builder-profile.entity';
-import { resolveLocation } from '../../features/listings/listing-location';
-import { applyListingInput } from '../../features/listings/listing-mapping';
+import { recordAudit } from '../../features/audit/audit.service';
+import { AuditEvent } from '../../features/audit/audit-event.entity';
+import type { ListingActor } from '../../features/listings/listing-actor';
 import { Listing } from '../../features/listings/listing.entity';
-import { User } from '../../features/users/user.entity';
+import { createListing, sellerMove } from '../../features/listings/listings.service';
+import { approveListing, sendBackListing } from '../../features/listings/moderation.service';
+import { addListingPhoto } from '../../features/photos/listing-photos.service';
+import { countPhotos } from '../../features/photos/photo-rules';
+import type { User } from '../../features/users/user.entity';
+import { DEMO_LISTINGS, type DemoListing, type DemoState } from './data';
+import { demoDrawings, toJpeg } from './pictures/render';
 
-/** Towns (gazetteer ids) the demo's invented people live near. */
-const NANTWICH = 2641892;
-const MATLOCK = 2642910;
+/** The audit action that ties a listing to its demo slug, so the next run finds it whatever has been edited. */
+const SEEDED = 'demo.listing_seeded';
 
-const end = (offsets: number[], railTopHeightMm = 1060) => ({
-  trackOffsetsMm: offsets,
-  railTopHeightMm,
-  railTopFrom: 'floor' as const,
-});
-
-const frame2x1 = {
-  frameDepthMm: 44,
-  frameThicknessMm: 18,
-  crossMemberSpacingMm: 400,
-  topMaterial: 'birch-plywood' as const,
-  topThicknessMm: 9,
-  supports: 'legs' as const,
+/** The moves that take a new draft to each demo state, as its seller and the moderator would make them. */
+const PATHS: Record<DemoState, readonly ListingMove[]> = {
+  draft: [],
+  awaiting_review: ['submit'],
+  listed: ['submit', 'approve'],
+  sent_back: ['submit', 'sendBack'],
+  withdrawn: ['submit', 'approve', 'withdraw'],
+};
+const AFTER: Partial<Record<ListingMove, ListingState>> = {
+  submit: 'awaiting_review',
+  approve: 'listed',
+  sendBack: 'sent_back',
+  withdraw: 'withdrawn',
 };
 
-interface DemoListing {
-  sellerEmail: string;
-  state: ListingState;
-  body: z.input<typeof listingInputSchema>;
+export interface DemoListingsReport {
+  created: number;
+  photos: number;
+  moves: number;
+  /** Listings left as they were because someone moved them off the demo's path. */
+  skipped: string[];
 }
 
-/** A few invented listings; the next change adds many more, with pictures drawn by code. */
-const DEMO_LISTINGS: readonly DemoListing[] = [
-  {
-    sellerEmail: 'owen@cattersby-post.test',
-    state: 'listed',
-    body: {
-      kind: 'module',
-      title: 'Cattersby Road station, OO, two boards',
-      description:
-        'The station boards of the Cattersby branch: a single platform, goods shed and run-round loop. ' +
-        'Built in 2x1 planed softwood on 400 mm centres with a 9 mm birch ply top. DCC bus in 1.5 mm², ' +
-        'boards joined with pattern-makers’ dowels and two bolts each side.',
-      scaleId: 'oo',
-      lengthMm: 1200,
-      widthMm: 500,
-      heightMm: 140,
-      boardCount: 2,
-      joinMethod: 'pattern-makers-dowels',
-      levels: { type: 'single' },
-      construction: frame2x1,
-      wiring: { control: 'dcc', busWireMm2: 1.5, boardConnectors: '15-pin D connectors between boards' },
-      endProfiles: { a: end([160]), b: end([160, 210]) },
-      finish: 'part-sceniced',
-      condition: 'sound',
-      conditionNotes: 'Platform edging needs regluing in one place; everything runs.',
-      priceMinor: 22_500,
-      currency: 'GBP',
-      townId: NANTWICH,
-      handling: { collection: true, delivery: { withinKm: 40, priceMinor: 2_500 }, courier: null },
-      weightKg: 11.5,
-    },
-  },
-  {
-    sellerEmail: 'owen@cattersby-post.test',
-    state: 'listed',
-    body: {
-      kind: 'module',
-      title: 'Cattersby fiddle yard, five roads, bare frame',
-      description:
-        'The hidden fiddle yard from the same layout, stripped back to the frame: 2x1 softwood sides, ' +
-        'cross members on 400 mm centres, no top. Sound and square; ready for a new top and track.',
-      scaleId: 'oo',
-      lengthMm: 1500,
-      widthMm: 450,
-      heightMm: 70,
-      boardCount: 1,
-      joinMethod: 'bolts',
-      levels: { type: 'single' },
-      construction: { ...frame2x1, topMaterial: 'none', topThicknessMm: null, supports: 'none' },
-      wiring: null,
-      endProfiles: { a: end([]), b: end([]) },
-      finish: 'bare-frame',
-      condition: 'sound',
-      conditionNotes: 'Old screw holes from the removed top; otherwise clean.',
-      priceMinor: 4_000,
-      currency: 'GBP',
-      townId: NANTWICH,
-      handling: { collection: true, delivery: null, courier: 'pallet' },
-      weightKg: 6,
-    },
-  },
-  {
-    sellerEmail: 'owen@cattersby-post.test',
-    state: 'awaiting_review',
-    body: {
-      kind: 'module',
-      title: 'Cattersby Junction, OO, two-level with storage below',
-      description:
-        'A two-level board: the junction on the upper deck, three storage roads 250 mm below. Frame in ' +
-        '2x1 softwood, 12 mm birch ply decks, wired for DC with two cab sections.',
-      scaleId: 'oo',
-      lengthMm: 1800,
-      widthMm: 550,
-      heightMm: 420,
-      boardCount: 1,
-      joinMethod: 'bolts',
-      levels: { type: 'two-level', deckGapMm: 250 },
-      construction: { ...frame2x1, topThicknessMm: 12 },
-      wiring: { control: 'dc', busWireMm2: 1, boardConnectors: 'Terminal strips' },
-      endProfiles: { a: end([160, 210]), b: end([160]) },
-      finish: 'wired-running',
-      condition: 'worn',
-      conditionNotes: 'The lower deck has some water marks; the upper deck is clean.',
-      priceMinor: 15_000,
-      currency: 'GBP',
-      townId: NANTWICH,
-      handling: { collection: true, delivery: null, courier: null },
-      weightKg: 24,
-    },
-  },
-  {
-    sellerEmail: 'nell@ashgrove-benchworks.test',
-    state: 'listed',
-    body: {
-      kind: 'service',
-      title: 'Ashgrove Benchworks: module frames and fiddle yards to order',
-      description:
-        'Portable modules and fixed benchwork built in planed softwood and birch ply, to your club’s end ' +
-        'profile. Legs with levelling feet; two-level frames with a fiddle yard below.',
-      builds: ['portable-modules', 'fixed-benchwork', 'two-level-benchwork', 'fiddle-yards', 'legs-and-trestles'],
-      townId: MATLOCK,
-      serviceAreaKm: 90,
-      leadTimeWeeks: 5,
-      materialsSupplied: ['timber', 'sheet', 'fixings', 'legs'],
-      currency: 'GBP',
-      rateCard: {
-        perMetreFrameMinor: 4_200,
-        perSquareMetreTopMinor: 2_800,
-        perLegSetMinor: 5_500,
-        perSecondLevelMinor: 8_500,
-        deliveryPerKmMinor: 55,
-        materialsMarkupBp: 1_200,
-      },
-    },
-  },
-];
+const actorOf = (user: User): ListingActor => ({ id: user.id, role: user.role, ip: '127.0.0.1' });
 
-/** Add (or reset) the demo's listings and the builder's approved profile. Safe to run again: matched by title. */
-export async function seedDemoListings(dataSource: DataSource): Promise<number> {
-  const users = dataSource.getRepository(User);
-  const repo = dataSource.getRepository(Listing);
-  for (const demo of DEMO_LISTINGS) {
-    const owner = await users.findOneByOrFail({ email: demo.sellerEmail });
-    const input = listingInputSchema.parse(demo.body);
-    const { position } = await resolveLocation(input.townId, input.position);
-    const listing = (await repo.findOneBy({ ownerId: owner.id, title: input.title })) ?? repo.create();
-    applyListingInput(listing, input, position);
-    const now = new Date();
-    Object.assign(listing, {
-      ownerId: owner.id,
-      state: demo.state,
-      stateChangedAt: now,
-      submittedAt: demo.state === 'draft' ? null : (listing.submittedAt ?? now),
-      publishedAt: demo.state === 'listed' ? (listing.publishedAt ?? now) : null,
-    });
-    await repo.save(listing);
+/** Demo slug → listing id, from the audit log. */
+async function seededIds(ctx: AppContext): Promise<Map<string, number>> {
+  const rows = await ctx.dataSource.getRepository(AuditEvent).find({ where: { action: SEEDED }, order: { id: 'ASC' } });
+  return new Map(rows.map((row) => [String(row.detail?.slug), Number(row.targetId)]));
+}
+
+/** The demo listing's row: known by its slug, else (from an older seed) by seller and title, else a new draft. */
+async function findOrCreate(ctx: AppContext, demo: DemoListing, owner: User, knownId: number | undefined) {
+  const repo = ctx.dataSource.getRepository(Listing);
+  const input = listingInputSchema.parse(demo.body);
+  const known = knownId === undefined ? null : await repo.findOneBy({ id: knownId });
+  if (known) return { listing: known, created: false };
+  const found = await repo.findOneBy({ ownerId: owner.id, title: input.title });
+  const id = found?.id ?? (await createListing(ctx, actorOf(owner), input)).id;
+  await ctx.transaction((m) =>
+    recordAudit(m, { actorId: null, action: SEEDED, targetType: 'listing', targetId: id, detail: { slug: demo.slug } }),
+  );
+  return { listing: await repo.findOneByOrFail({ id }), created: !found };
+}
+
+/** Upload the drawings the listing still lacks, through the photo pipeline, while its seller may still add them. */
+async function addPictures(ctx: AppContext, demo: DemoListing, owner: User, listing: Listing): Promise<number> {
+  if (!EDITABLE_LISTING_STATES.includes(listing.state)) return 0;
+  const have = await countPhotos(ctx.dataSource.manager, listing.id);
+  const drawings = demoDrawings(demo);
+  for (const svg of drawings.slice(have)) await addListingPhoto(ctx, actorOf(owner), listing.id, await toJpeg(svg));
+  return Math.max(0, drawings.length - have);
+}
+
+async function move(ctx: AppContext, demo: DemoListing, id: number, step: ListingMove, owner: User, moderator: User) {
+  if (step === 'approve') {
+    const checklist = Object.fromEntries(CHECKLIST_ITEMS.map((item) => [item, true]));
+    return approveListing(ctx, actorOf(moderator), id, approveSchema.parse({ checklist }));
   }
-  const builder = await users.findOneByOrFail({ email: 'nell@ashgrove-benchworks.test' });
-  const profiles = dataSource.getRepository(BuilderProfile);
-  const profile = (await profiles.findOneBy({ userId: builder.id })) ?? profiles.create({ userId: builder.id });
-  Object.assign(profile, {
-    businessName: 'Ashgrove Benchworks',
-    about: 'Benchwork built to order in a small workshop: portable modules, fixed frames and fiddle yards.',
-    townId: MATLOCK,
-    builds: ['portable-modules', 'fixed-benchwork', 'fiddle-yards'],
-    state: 'approved',
-    decidedAt: profile.decidedAt ?? new Date(),
-  });
-  await profiles.save(profile);
-  return DEMO_LISTINGS.length;
+  if (step === 'sendBack') return sendBackListing(ctx, actorOf(moderator), id, sendBackSchema.parse(demo.sendBack));
+  if (step === 'submit' || step === 'withdraw') return sellerMove(ctx, actorOf(owner), id, step);
+  throw new Error(`demo seed: no way to make the move ${step}`);
+}
+
+/** The moves still to make from `state` along the demo's path, or null when `state` is off the path. */
+function remainingMoves(target: DemoState, state: ListingState): readonly ListingMove[] | null {
+  const path = PATHS[target];
+  const states: ListingState[] = ['draft', ...path.map((m) => AFTER[m]!)];
+  const at = states.lastIndexOf(state);
+  return at === -1 ? null : path.slice(at);
+}
+
+/**
+ * Add the demo's listings through the services a seller and a moderator use: create the draft, upload its drawings,
+ * then submit, approve, send back or withdraw. Running it again adds nothing: each listing is found by its slug, and
+ * only pictures or moves still missing (say, after an interrupted run) are made.
+ */
+export async function seedDemoListings(
+  ctx: AppContext,
+  sellers: ReadonlyMap<string, User>,
+  moderator: User,
+): Promise<DemoListingsReport> {
+  const known = await seededIds(ctx);
+  const report: DemoListingsReport = { created: 0, photos: 0, moves: 0, skipped: [] };
+  const seedOne = async (demo: DemoListing) => {
+    const owner = sellers.get(demo.seller);
+    if (!owner) throw new Error(`demo seed: no account ${demo.seller} for ${demo.slug}`);
+    const { listing, created } = await findOrCreate(ctx, demo, owner, known.get(demo.slug));
+    if (created) report.created += 1;
+    const added = await addPictures(ctx, demo, owner, listing);
+    report.photos += added;
+    const { state } = await ctx.dataSource.getRepository(Listing).findOneByOrFail({ id: listing.id });
+    const moves = remainingMoves(demo.state, state);
+    if (!moves) return void report.skipped.push(demo.slug);
+    for (const step of moves) await move(ctx, demo, listing.id, step, owner, moderator);
+    report.moves += moves.length;
+  };
+  // A few at a time: drawing and re-encoding pictures is the slow part, and it runs off the main thread.
+  const queue = [...DEMO_LISTINGS];
+  const worker = async () => {
+    for (let demo = queue.shift(); demo; demo = queue.shift()) await seedOne(demo);
+  };
+  await Promise.all(Array.from({ length: 4 }, worker));
+  return report;
 }

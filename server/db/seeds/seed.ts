@@ -1,37 +1,29 @@
+import { createApp } from '../../app';
 import { loadConfig } from '../../config';
-import { hashPassword } from '../../features/auth/password-hash';
-import { User } from '../../features/users/user.entity';
-import { createDataSource } from '../data-source';
-import { DEMO_ACCOUNTS } from './demo-accounts';
-import { seedDemoListings } from './demo-listings';
+import { DEMO_LISTINGS } from './data';
+import { seedDemo } from './demo-seed';
 
-/** `npm run db:seed`: add the demo scenario's accounts (again safely: existing ones are reset). */
+/**
+ * `npm run db:seed`: add the demo scenario (again safely: what is already there is left alone). It runs on a real
+ * app instance, so listings, pictures and moderation go through the same services as a seller's and a moderator's.
+ * E-mails the moderation sends to the demo sellers are queued and go out when the app next runs.
+ */
 async function main(): Promise<void> {
   const config = loadConfig();
   if (config.env === 'production') throw new Error('The demo scenario is never seeded in production.');
-  const dataSource = createDataSource(config.db);
-  await dataSource.initialize();
+  const started = Date.now();
+  const app = await createApp({ ...config, logLevel: 'warn' });
   try {
-    const repo = dataSource.getRepository(User);
-    for (const account of DEMO_ACCOUNTS) {
-      const existing = await repo.findOneBy({ email: account.email });
-      await repo.save(
-        repo.create({
-          ...existing,
-          email: account.email,
-          displayName: account.displayName,
-          role: account.role,
-          passwordHash: await hashPassword(account.password),
-          emailVerifiedAt: existing?.emailVerifiedAt ?? new Date(),
-          suspendedAt: null,
-          suspendedReason: null,
-        }),
-      );
-    }
-    console.log(`Seeded ${DEMO_ACCOUNTS.length} demo accounts.`);
-    console.log(`Seeded ${await seedDemoListings(dataSource)} demo listings.`);
+    const { accounts, accountsChanged, listings } = await seedDemo(app.ctx);
+    console.log(`Demo accounts: ${accounts} (${accountsChanged} created or reset).`);
+    console.log(
+      `Demo listings: ${DEMO_LISTINGS.length} (${listings.created} created, ${listings.photos} pictures drawn, ` +
+        `${listings.moves} moves) in ${((Date.now() - started) / 1000).toFixed(1)} s.`,
+    );
+    if (listings.skipped.length)
+      console.log(`Left as they are (moved off the demo's path): ${listings.skipped.join(', ')}`);
   } finally {
-    await dataSource.destroy();
+    await app.close();
   }
 }
 

@@ -1,3 +1,4 @@
+import type { EntityManager } from 'typeorm';
 import type { AppContext } from '../../app-context';
 import type { ListingSearchQuery } from '../../../shared/schemas/listings';
 import type { ListingSearchResult } from '../../../shared/types/listings';
@@ -6,12 +7,21 @@ import { photosByListing } from '../photos/listing-photos.repository';
 import { gazetteer } from '../towns/gazetteer';
 import { presentSearchItem } from './listing.presenter';
 import { listingsInOrder } from './listing.repository';
-import { buildSearchSql } from './search-sql';
+import { buildSearchSql, type SearchSql } from './search-sql';
 import { splitSearchText } from './search-text';
 
 interface IdRow {
   id: number | string;
   distance_km: number | string | null;
+  total?: number | string;
+}
+
+type CountRow = { total: number | string };
+
+/** The count the page carried; past the last page the page is empty and carries none, so count apart. */
+async function totalFromPage(m: EntityManager, plan: SearchSql, rows: IdRow[]): Promise<number> {
+  if (rows.length > 0) return Number(rows[0]!.total ?? 0);
+  return Number(((await m.query(plan.countSql, plan.countParams)) as CountRow[])[0]?.total ?? 0);
 }
 
 /**
@@ -28,8 +38,9 @@ export async function searchListings(ctx: AppContext, query: ListingSearchQuery)
   const m = ctx.dataSource.manager;
   const [rows, counted] = (await Promise.all([
     m.query(plan.sql, plan.params),
-    m.query(plan.countSql, plan.countParams),
-  ])) as [IdRow[], { total: number | string }[]];
+    plan.countInPage ? null : m.query(plan.countSql, plan.countParams),
+  ])) as [IdRow[], CountRow[] | null];
+  const total = counted ? Number(counted[0]?.total ?? 0) : await totalFromPage(m, plan, rows);
   const listings = await listingsInOrder(
     m,
     rows.map((r) => Number(r.id)),
@@ -43,7 +54,7 @@ export async function searchListings(ctx: AppContext, query: ListingSearchQuery)
   );
   return {
     items: listings.map((l) => presentSearchItem(l, towns, photos.get(l.id) ?? [], distances.get(l.id))),
-    total: Number(counted[0]?.total ?? 0),
+    total,
     page: query.page,
     pageSize: query.pageSize,
     sort,

@@ -36,7 +36,8 @@ const decimalNumber: ValueTransformer = {
 @Index('ix_listings_state_published', ['state', 'publishedAt'])
 @Index('ix_listings_state_price', ['state', 'priceMinor'])
 @Index('ix_listings_state_scale', ['state', 'scaleId'])
-@Index('ix_listings_state_position', ['state', 'latitude', 'longitude'])
+/** Covers the distance search: the box and service areas are checked, and sellers joined, from the index alone. */
+@Index('ix_listings_state_kind_position', ['state', 'kind', 'latitude', 'longitude', 'serviceAreaKm', 'ownerId'])
 @Index('ix_listings_state_submitted', ['state', 'submittedAt'])
 @Index('ix_listings_owner_state', ['ownerId', 'state'])
 export class Listing {

@@ -103,11 +103,20 @@ function filters(q: ListingSearchQuery, text: SearchText | null, centre: LatLon 
 export interface SearchSql {
   sql: string;
   params: unknown[];
+  /** The page carries the count of every match in its `total` column; the count query is needed only past the end. */
+  countInPage: boolean;
   countSql: string;
   countParams: unknown[];
 }
 
-/** One page of matching ids (with score and distance), and the count of every match. */
+/** Sorts that score every match anyway (by relevance or distance): the page may as well count them as it goes. */
+const SCORES_EVERY_MATCH: readonly ListingSort[] = ['relevance', 'distance'];
+
+/**
+ * One page of matching ids (with score and distance), and the count of every match. The page joins listings first
+ * (STRAIGHT_JOIN), so "newest" and "price" can read the listings in index order and stop after a page; the
+ * optimizer would otherwise start from the users and sort every listing. The count keeps the optimizer's order.
+ */
 export function buildSearchSql(
   q: ListingSearchQuery,
   text: SearchText | null,
@@ -115,13 +124,18 @@ export function buildSearchSql(
   sort: ListingSort,
 ): SearchSql {
   const where = filters(q, text, centre);
-  const from = `FROM listings l INNER JOIN users u ON u.id = l.owner_id WHERE ${where.sql.join(' AND ')}`;
+  const on = `users u ON u.id = l.owner_id WHERE ${where.sql.join(' AND ')}`;
   const score = text?.fulltext ? { sql: MATCH, params: [text.fulltext] } : { sql: 'NULL', params: [] };
   const distance = centre ? { sql: DISTANCE, params: distanceParams(centre) } : { sql: 'NULL', params: [] };
+  const countInPage = SCORES_EVERY_MATCH.includes(sort);
+  const total = countInPage ? ', COUNT(*) OVER () AS total' : '';
   return {
-    sql: `SELECT l.id AS id, ${score.sql} AS score, ${distance.sql} AS distance_km ${from} ORDER BY ${ORDER_BY[sort]} LIMIT ? OFFSET ?`,
+    sql:
+      `SELECT l.id AS id, ${score.sql} AS score, ${distance.sql} AS distance_km${total} ` +
+      `FROM listings l STRAIGHT_JOIN ${on} ORDER BY ${ORDER_BY[sort]} LIMIT ? OFFSET ?`,
     params: [...score.params, ...distance.params, ...where.params, q.pageSize, (q.page - 1) * q.pageSize],
-    countSql: `SELECT COUNT(*) AS total ${from}`,
+    countInPage,
+    countSql: `SELECT COUNT(*) AS total FROM listings l INNER JOIN ${on}`,
     countParams: where.params,
   };
 }

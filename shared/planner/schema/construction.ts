@@ -117,7 +117,9 @@ export const loadsSchema = strictGroup('the loads', {
     .describe('Track, ballast and scenery on the top, kg/m²; default 50 (common practice, no source).'),
   pointLoadN: rangeField('Leaning load', 'N', 0, 3000)
     .default(DEFAULT_POINT_LOAD_N)
-    .describe('Someone leaning on the front edge at mid-span, N; default 0 (not checked); about 500 N is usual for a person leaning (common practice, no source).'),
+    .describe(
+      'Someone leaning on the front edge at mid-span, N; default 0 (not checked); about 500 N is usual for a person leaning (common practice, no source).',
+    ),
   spanLimitRatio: wholeNumberField('Sag limit ratio', 150, 500)
     .default(DEFAULT_SPAN_LIMIT_RATIO)
     .describe('Allowed sag is span / this; default 300, from EN 1995-1-1 Table 7.2’s range (L/150 to L/500).'),
