@@ -32,7 +32,7 @@ async function crossMembersToCut(page: Page): Promise<number> {
 
 /** A full-page screenshot from the top, so the sticky header sits where a person sees it. */
 async function shoot(page: Page, name: string): Promise<void> {
-  await page.evaluate(() => window.scrollTo(0, 0));
+  await page.evaluate('window.scrollTo(0, 0)');
   await screenshot(page, name);
 }
 
@@ -123,7 +123,7 @@ describe('the frame planner in the browser', () => {
     try {
       await phone.page.goto(`${appUrl}/planner`);
       await phone.page.locator('#plan-summary').waitFor();
-      const widths = await phone.page.evaluate(() => [document.documentElement.scrollWidth, window.innerWidth]);
+      const widths = await phone.page.evaluate<number[]>('[document.documentElement.scrollWidth, window.innerWidth]');
       expect(widths[0]).toBeLessThanOrEqual(widths[1]!);
       const inputsTop = await phone.page.getByRole('heading', { name: 'Your boards' }).boundingBox();
       const planTop = await phone.page.getByRole('heading', { name: 'The plan' }).boundingBox();
