@@ -2,26 +2,25 @@ import type TestAgent from 'supertest/lib/agent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { AppInstance } from '../../server/app';
 import { buildSearchFixture, type SearchFixture } from '../support/search-fixture';
+import { searchQueries } from '../support/search-queries';
 import { browserLikeAgent, startTestApp } from '../support/test-app';
+
+type SearchQueries = ReturnType<typeof searchQueries>;
 
 let app: AppInstance;
 let visitor: TestAgent;
 let fixture: SearchFixture;
+let ids: SearchQueries['ids'];
+let idsOf: SearchQueries['idsOf'];
+let sameSet: SearchQueries['sameSet'];
 
 beforeAll(async () => {
   app = await startTestApp();
   visitor = await browserLikeAgent(app);
   fixture = await buildSearchFixture(app);
+  ({ ids, idsOf, sameSet } = searchQueries(visitor, fixture));
 });
 afterAll(() => app.close());
-
-async function ids(query: Record<string, string | number | string[]>): Promise<number[]> {
-  const res = await visitor.get('/api/listings').query({ q: fixture.mark, pageSize: 48, ...query });
-  expect(res.status, JSON.stringify(res.body)).toBe(200);
-  return (res.body.items as { id: number }[]).map((l) => l.id);
-}
-const idsOf = (...names: (keyof SearchFixture['listings'])[]) => names.map((n) => fixture.listings[n].id);
-const sameSet = (actual: number[], expected: number[]) => expect([...actual].sort()).toEqual([...expected].sort());
 
 describe('GET /api/listings sorting and pages', () => {
   it('puts the listing matching more of the words first when sorting by relevance', async () => {
