@@ -21,6 +21,8 @@ import { moderationRouter } from './features/listings/moderation.router';
 import { listingPhotosRouter } from './features/photos/listing-photos.router';
 import { photoFilesRouter } from './features/photos/photo-files.router';
 import { MailDispatcher } from './features/mail/mail-dispatcher';
+import { savedSearchesRouter } from './features/saved-searches/saved-searches.router';
+import { shortlistRouter } from './features/shortlist/shortlist.router';
 import { townsRouter } from './features/towns/towns.router';
 import { csrf, sameOriginOnly } from './http/middlewares/csrf';
 import { apiNotFound, errorHandler } from './http/middlewares/error-handler';
@@ -115,6 +117,8 @@ export async function createApp(config: Config): Promise<AppInstance> {
     ['/photos', photoFilesRouter(ctx)],
     ['/moderation', moderationRouter(ctx)],
     ['/builder-profiles', builderProfilesRouter(ctx)],
+    ['/shortlist', shortlistRouter(ctx)],
+    ['/saved-searches', savedSearchesRouter(ctx)],
     ['/towns', townsRouter()],
   ];
   for (const [path, router] of mounts.slice(1)) api.use(path, router);

@@ -117,6 +117,12 @@ export const routes: RouteRecordRaw[] = [
     meta: { requiresAuth: true, title: 'My listings' },
   },
   {
+    path: '/my/shortlist',
+    name: 'my-shortlist',
+    component: () => import('@/pages/shortlist/MyShortlistPage.vue'),
+    meta: { requiresAuth: true, title: 'My shortlist' },
+  },
+  {
     path: '/review',
     name: 'review',
     component: () => import('@/pages/review/ReviewDeskPage.vue'),

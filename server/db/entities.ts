@@ -7,6 +7,9 @@ import { Listing } from '../features/listings/listing.entity';
 import { OutboundEmail } from '../features/mail/outbound-email.entity';
 import { ListingPhoto } from '../features/photos/listing-photo.entity';
 import { SavedPlan } from '../features/plans/saved-plan.entity';
+import { SavedSearchHit } from '../features/saved-searches/saved-search-hit.entity';
+import { SavedSearch } from '../features/saved-searches/saved-search.entity';
+import { ShortlistEntry } from '../features/shortlist/shortlist-entry.entity';
 import { User } from '../features/users/user.entity';
 
 /** Every entity, listed once so the data source and tests agree. */
@@ -21,4 +24,7 @@ export const entities = [
   ListingPhoto,
   BuilderProfile,
   SavedPlan,
+  ShortlistEntry,
+  SavedSearch,
+  SavedSearchHit,
 ];

@@ -3,6 +3,8 @@ import { SavedPlans1764713000000 } from './migrations/1764713000000-saved-plans'
 import { Listings1764800000000 } from './migrations/1764800000000-listings';
 import { ListingPhotos1764900000000 } from './migrations/1764900000000-listing-photos';
 import { ListingsDistanceIndex1765000000000 } from './migrations/1765000000000-listings-distance-index';
+import { Shortlist1765100000000 } from './migrations/1765100000000-shortlist';
+import { SavedSearches1765200000000 } from './migrations/1765200000000-saved-searches';
 
 /** Every migration in order; listed explicitly so they run the same under tsx, Vitest and a build. */
 export const migrations = [
@@ -11,4 +13,6 @@ export const migrations = [
   Listings1764800000000,
   ListingPhotos1764900000000,
   ListingsDistanceIndex1765000000000,
+  Shortlist1765100000000,
+  SavedSearches1765200000000,
 ];

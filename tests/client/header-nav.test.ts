@@ -29,7 +29,7 @@ describe('the header menu', () => {
     expect(labels(mountNavFor(null))).toEqual(['Find modules', 'Frame planner', 'Sign in', 'Join']);
   });
 
-  it('offers a member selling, their listings, their plans, their account and signing out, and names them', () => {
+  it('offers a member selling, their listings, their shortlist, their plans, their account and signing out, and names them', () => {
     const wrapper = mountNavFor('member');
 
     expect(labels(wrapper)).toEqual([
@@ -38,6 +38,7 @@ describe('the header menu', () => {
       'Sell a module',
       'Signed in as Ada Siding',
       'My listings',
+      'My shortlist',
       'My plans',
       'My account',
       'Sign out',
@@ -52,6 +53,7 @@ describe('the header menu', () => {
       'Sell a module',
       'Signed in as Ada Siding',
       'My listings',
+      'My shortlist',
       'Review desk',
       'Audit trail',
       'My plans',
@@ -67,6 +69,7 @@ describe('the header menu', () => {
       'Sell a module',
       'Signed in as Ada Siding',
       'My listings',
+      'My shortlist',
       'Review desk',
       'Audit trail',
       'People & roles',

@@ -8,6 +8,7 @@ import {
 } from '../../../shared/listings/states';
 import { conflict } from '../../http/errors';
 import { recordAudit } from '../audit/audit.service';
+import { announceToSavedSearches } from '../saved-searches/saved-search-alerts';
 import type { Listing } from './listing.entity';
 
 /** How a state reads after "This listing is …". */
@@ -25,6 +26,8 @@ export interface MoveActor {
   id: number | null;
   ip: string | null;
   as: ListingMover;
+  /** The site's address, for links in e-mail; needed by the moves that announce a listing ('approve'). */
+  appOrigin?: string;
 }
 
 /** The 409 answer for a move the table does not allow from the listing's state. */
@@ -44,6 +47,7 @@ export const refusedEdit = (state: ListingState) =>
 /**
  * Apply one move of the transition table to a listing held with a row lock: refuse it with 409 if the table does
  * not allow it, else change the state, stamp the dates and record who made the move and when in the audit log.
+ * Approval is the one move that puts a listing in front of buyers, so it also tells matching saved searches.
  */
 export async function moveListing(
   m: EntityManager,
@@ -70,4 +74,8 @@ export async function moveListing(
     detail: { from, to: rule.to, ...detail },
     ip: actor.ip,
   });
+  if (move === 'approve') {
+    if (!actor.appOrigin) throw new Error('listing move approve needs the site address for its e-mail');
+    await announceToSavedSearches(m, listing, actor.appOrigin);
+  }
 }

@@ -25,7 +25,12 @@ import { lockListing } from './listing.repository';
 
 type Locked = Listing & { owner: User };
 
-const asModerator = (actor: ListingActor): MoveActor => ({ id: actor.id, ip: actor.ip, as: 'moderator' });
+const asModerator = (ctx: AppContext, actor: ListingActor): MoveActor => ({
+  id: actor.id,
+  ip: actor.ip,
+  as: 'moderator',
+  appOrigin: ctx.config.appOrigin,
+});
 const listingUrl = (ctx: AppContext, id: number) => `${ctx.config.appOrigin}/listings/${id}`;
 
 /** Lock the listing; a moderator never decides on their own listing. */
@@ -59,7 +64,7 @@ export async function approveListing(ctx: AppContext, actor: ListingActor, id: n
     const listing = await lockForDecision(m, actor, id);
     if (!canMove(listing.state, 'approve')) throw refusedMove(listing.state, 'approve');
     await assertHasPhotos(m, id);
-    await moveListing(m, listing, 'approve', asModerator(actor));
+    await moveListing(m, listing, 'approve', asModerator(ctx, actor));
     await recordDecision(m, actor, listing, {
       decision: 'approved',
       reasons: [],
@@ -80,7 +85,7 @@ export async function approveListing(ctx: AppContext, actor: ListingActor, id: n
 export async function sendBackListing(ctx: AppContext, actor: ListingActor, id: number, input: SendBackInput) {
   await ctx.transaction(async (m) => {
     const listing = await lockForDecision(m, actor, id);
-    await moveListing(m, listing, 'sendBack', asModerator(actor), { reasons: input.reasons });
+    await moveListing(m, listing, 'sendBack', asModerator(ctx, actor), { reasons: input.reasons });
     await recordDecision(m, actor, listing, {
       decision: 'sent_back',
       reasons: input.reasons,
@@ -108,7 +113,7 @@ export async function takeDownListing(ctx: AppContext, actor: ListingActor, id: 
     const { owner } = listing;
     if (input.sellerAction === 'suspend' && hasAnyRole(owner.role, ['moderator']))
       throw forbidden('A moderator or administrator can be suspended only by an administrator.');
-    await moveListing(m, listing, 'takeDown', asModerator(actor), { reason: input.reason });
+    await moveListing(m, listing, 'takeDown', asModerator(ctx, actor), { reason: input.reason });
     await recordDecision(m, actor, listing, {
       decision: 'taken_down',
       reasons: [],

@@ -73,8 +73,14 @@ function nearTown(c: Conditions, centre: LatLon, km: number): void {
   );
 }
 
-function filters(q: ListingSearchQuery, text: SearchText | null, centre: LatLon | null): Conditions {
+function filters(
+  q: ListingSearchQuery,
+  text: SearchText | null,
+  centre: LatLon | null,
+  onlyListingId: number | undefined,
+): Conditions {
   const c = new Conditions();
+  if (onlyListingId !== undefined) c.add('l.id = ?', onlyListingId);
   c.add("l.state = 'listed'");
   c.add('u.suspended_at IS NULL');
   if (text?.fulltext) c.add(MATCH, text.fulltext);
@@ -116,14 +122,16 @@ const SCORES_EVERY_MATCH: readonly ListingSort[] = ['relevance', 'distance'];
  * One page of matching ids (with score and distance), and the count of every match. The page joins listings first
  * (STRAIGHT_JOIN), so "newest" and "price" can read the listings in index order and stop after a page; the
  * optimizer would otherwise start from the users and sort every listing. The count keeps the optimizer's order.
+ * `onlyListingId` narrows the search to one listing, so a saved search can ask whether a new listing matches it.
  */
 export function buildSearchSql(
   q: ListingSearchQuery,
   text: SearchText | null,
   centre: LatLon | null,
   sort: ListingSort,
+  onlyListingId?: number,
 ): SearchSql {
-  const where = filters(q, text, centre);
+  const where = filters(q, text, centre, onlyListingId);
   const on = `users u ON u.id = l.owner_id WHERE ${where.sql.join(' AND ')}`;
   const score = text?.fulltext ? { sql: MATCH, params: [text.fulltext] } : { sql: 'NULL', params: [] };
   const distance = centre ? { sql: DISTANCE, params: distanceParams(centre) } : { sql: 'NULL', params: [] };

@@ -124,6 +124,17 @@ export const mailTemplates = {
         : []),
     ]),
 
+  savedSearchMatch: (name: string, searchName: string, title: string, url: string) =>
+    compose(
+      `New on Benchwright for "${searchName}": ${title}`,
+      name,
+      [
+        `A listing that matches your saved search "${oneLine(searchName)}" has just been listed.`,
+        'You can stop these messages by deleting the search from your shortlist page.',
+      ],
+      { url, label: 'See the listing' },
+    ),
+
   builderProfileApproved: (name: string, url: string) =>
     compose(
       'Your builder profile is approved',
