@@ -55,7 +55,16 @@ describe.each([
     const admin = await buildUser(dataSource, { role: 'admin', displayName: 'Ursula Axle' });
     const { page } = browser;
     await signIn(page, admin.email);
-    for (const path of ['/account', '/admin/people', '/audit', '/sell', '/my/listings', '/review', '/plans', '/my/shortlist']) {
+    for (const path of [
+      '/account',
+      '/admin/people',
+      '/audit',
+      '/sell',
+      '/my/listings',
+      '/review',
+      '/plans',
+      '/my/shortlist',
+    ]) {
       await page.goto(`${appUrl}${path}`);
       await page.locator('main h1').first().waitFor();
       await page.getByText(/Loading/).waitFor({ state: 'detached' });
