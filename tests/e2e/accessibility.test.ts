@@ -26,7 +26,7 @@ async function violations(page: Page) {
 
 async function signIn(page: Page, email: string) {
   await page.goto(`${appUrl}/sign-in`);
-  await page.getByLabel('E-mail address').fill(email);
+  await page.getByLabel('E-mail address', { exact: true }).fill(email);
   await page.getByLabel('Password', { exact: true }).fill(GOOD_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.waitForURL((url) => url.pathname !== '/sign-in');

@@ -36,7 +36,7 @@ describe('joining Benchwright in the browser', () => {
 
     await page.goto(`${appUrl}/join`);
     await page.getByLabel('Your name on Benchwright').fill('Priya Loopline');
-    await page.getByLabel('E-mail address').fill(email);
+    await page.getByLabel('E-mail address', { exact: true }).fill(email);
     await page.getByLabel('Password', { exact: true }).fill(GOOD_PASSWORD);
     await page.getByRole('button', { name: 'Create my account' }).click();
     await expect.poll(() => page.getByText(email).count()).toBeGreaterThan(0);
@@ -50,8 +50,9 @@ describe('joining Benchwright in the browser', () => {
     );
     await page.getByText('Your e-mail address is confirmed').waitFor();
     await page.getByRole('main').getByRole('link', { name: 'Sign in' }).click();
+    await page.waitForURL(/\/sign-in/);
 
-    await page.getByLabel('E-mail address').fill(email);
+    await page.getByLabel('E-mail address', { exact: true }).fill(email);
     await page.getByLabel('Password', { exact: true }).fill(GOOD_PASSWORD);
     await page.getByRole('button', { name: 'Sign in' }).click();
 
@@ -74,7 +75,7 @@ describe('joining Benchwright in the browser', () => {
     const { page } = browser;
 
     await page.goto(`${appUrl}/sign-in`);
-    await page.getByLabel('E-mail address').fill(admin.email);
+    await page.getByLabel('E-mail address', { exact: true }).fill(admin.email);
     await page.getByLabel('Password', { exact: true }).fill(GOOD_PASSWORD);
     await page.getByRole('button', { name: 'Sign in' }).click();
     const nav = page.getByRole('navigation', { name: 'Main' });
@@ -88,7 +89,7 @@ describe('joining Benchwright in the browser', () => {
 
     const member = await buildUser(dataSource);
     await page.goto(`${appUrl}/sign-in`);
-    await page.getByLabel('E-mail address').fill(member.email);
+    await page.getByLabel('E-mail address', { exact: true }).fill(member.email);
     await page.getByLabel('Password', { exact: true }).fill(GOOD_PASSWORD);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await openAccountMenu(page);
@@ -103,7 +104,7 @@ describe('joining Benchwright in the browser', () => {
     const { page } = browser;
     await page.goto(`${appUrl}/join`);
     await page.getByLabel('Your name on Benchwright').fill('Rhys Gradient');
-    await page.getByLabel('E-mail address').fill(uniqueEmail());
+    await page.getByLabel('E-mail address', { exact: true }).fill(uniqueEmail());
     await page.getByLabel('Password', { exact: true }).fill('qwertyuiop123');
     await page.getByRole('button', { name: 'Create my account' }).click();
 

@@ -40,7 +40,7 @@ function boardPhoto(shade: string): Promise<Buffer> {
 
 async function signIn(page: Page, email: string): Promise<void> {
   await page.goto(`${appUrl}/sign-in`);
-  await page.getByLabel('E-mail address').fill(email);
+  await page.getByLabel('E-mail address', { exact: true }).fill(email);
   await page.getByLabel('Password', { exact: true }).fill(GOOD_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.waitForURL((url) => url.pathname !== '/sign-in');

@@ -83,7 +83,7 @@ describe('the frame planner in the browser', () => {
     const member = await buildUser(dataSource, { displayName: 'Nell Fiddleyard' });
     await page.getByRole('button', { name: 'Save to my account' }).click();
     await page.waitForURL(/\/sign-in/);
-    await page.getByLabel('E-mail address').fill(member.email);
+    await page.getByLabel('E-mail address', { exact: true }).fill(member.email);
     await page.getByLabel('Password', { exact: true }).fill(GOOD_PASSWORD);
     await page.getByRole('button', { name: 'Sign in' }).click();
     const dialog = page.getByRole('dialog', { name: 'Save this plan to your account' });
