@@ -3,7 +3,7 @@ import type { Page } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createDataSource } from '../../server/db/data-source';
-import { openBrowser, screenshot, type BrowserSession } from '../support/browser';
+import { openBrowser, screenshot, type BrowserSession, signInThroughPage } from '../support/browser';
 import { buildUser, GOOD_PASSWORD } from '../support/factories';
 import { testConfig } from '../support/test-env';
 
@@ -24,13 +24,7 @@ async function violations(page: Page) {
   return result.violations.map((v) => `${v.impact}: ${v.id} — ${v.help} (${v.nodes.length})`);
 }
 
-async function signIn(page: Page, email: string) {
-  await page.goto(`${appUrl}/sign-in`);
-  await page.getByLabel('E-mail address', { exact: true }).fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(GOOD_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((url) => url.pathname !== '/sign-in');
-}
+const signIn = (page: Page, email: string) => signInThroughPage(page, appUrl, email, GOOD_PASSWORD);
 
 describe.each([
   ['desktop', { width: 1280, height: 900 }],

@@ -5,7 +5,7 @@ import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createDataSource } from '../../server/db/data-source';
 import path from 'node:path';
-import { ARTIFACTS, openBrowser, screenshot, type BrowserSession } from '../support/browser';
+import { ARTIFACTS, openBrowser, screenshot, type BrowserSession, signInThroughPage } from '../support/browser';
 import { buildUser, GOOD_PASSWORD } from '../support/factories';
 import { testConfig } from '../support/test-env';
 
@@ -38,13 +38,7 @@ function boardPhoto(shade: string): Promise<Buffer> {
   return sharp(Buffer.from(svg)).jpeg({ quality: 80 }).toBuffer();
 }
 
-async function signIn(page: Page, email: string): Promise<void> {
-  await page.goto(`${appUrl}/sign-in`);
-  await page.getByLabel('E-mail address', { exact: true }).fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(GOOD_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((url) => url.pathname !== '/sign-in');
-}
+const signIn = (page: Page, email: string) => signInThroughPage(page, appUrl, email, GOOD_PASSWORD);
 
 /** Screenshot once the page's pictures have arrived. */
 async function settledShot(page: Page, name: string): Promise<void> {

@@ -1,7 +1,7 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { AppInstance } from '../../server/app';
-import { openBrowser, screenshot, type BrowserSession } from '../support/browser';
+import { openBrowser, screenshot, type BrowserSession, signInThroughPage } from '../support/browser';
 import { buildUser, GOOD_PASSWORD } from '../support/factories';
 import { buildListedListing } from '../support/listing-factories';
 import { startTestApp } from '../support/test-app';
@@ -14,13 +14,7 @@ beforeAll(async () => {
 });
 afterAll(() => app?.close());
 
-async function signIn(page: Page, email: string) {
-  await page.goto(`${appUrl}/sign-in`);
-  await page.getByLabel('E-mail address', { exact: true }).fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(GOOD_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((url) => url.pathname !== '/sign-in');
-}
+const signIn = (page: Page, email: string) => signInThroughPage(page, appUrl, email, GOOD_PASSWORD);
 
 describe.each([
   ['desktop', { width: 1280, height: 900 }],

@@ -51,3 +51,12 @@ export async function screenshot(page: Page, name: string): Promise<string> {
   await page.screenshot({ path: file, fullPage: true });
   return file;
 }
+
+/** Sign in through the sign-in page as a person would, and wait until the app has moved on. */
+export async function signInThroughPage(page: Page, appUrl: string, email: string, password: string): Promise<void> {
+  await page.goto(`${appUrl}/sign-in`);
+  await page.getByLabel('E-mail address', { exact: true }).fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL((url) => url.pathname !== '/sign-in');
+}
