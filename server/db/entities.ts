@@ -5,6 +5,13 @@ import { ListingDecision } from '../features/listings/listing-decision.entity';
 import { ListingReport } from '../features/listings/listing-report.entity';
 import { Listing } from '../features/listings/listing.entity';
 import { OutboundEmail } from '../features/mail/outbound-email.entity';
+import { FeeSchedule } from '../features/orders/fee-schedule.entity';
+import { HandledPaymentEvent } from '../features/orders/handled-payment-event.entity';
+import { MoneyMovement } from '../features/orders/money-movement.entity';
+import { OrderEvent } from '../features/orders/order-event.entity';
+import { OrderPayment } from '../features/orders/order-payment.entity';
+import { Order } from '../features/orders/order.entity';
+import { PayoutAccount } from '../features/orders/payout-account.entity';
 import { ListingPhoto } from '../features/photos/listing-photo.entity';
 import { SavedPlan } from '../features/plans/saved-plan.entity';
 import { SavedSearchHit } from '../features/saved-searches/saved-search-hit.entity';
@@ -27,4 +34,11 @@ export const entities = [
   ShortlistEntry,
   SavedSearch,
   SavedSearchHit,
+  Order,
+  OrderEvent,
+  OrderPayment,
+  MoneyMovement,
+  PayoutAccount,
+  HandledPaymentEvent,
+  FeeSchedule,
 ];

@@ -5,6 +5,7 @@ import { ListingPhotos1764900000000 } from './migrations/1764900000000-listing-p
 import { ListingsDistanceIndex1765000000000 } from './migrations/1765000000000-listings-distance-index';
 import { Shortlist1765100000000 } from './migrations/1765100000000-shortlist';
 import { SavedSearches1765200000000 } from './migrations/1765200000000-saved-searches';
+import { Orders1765800000000 } from './migrations/1765800000000-orders';
 
 /** Every migration in order; listed explicitly so they run the same under tsx, Vitest and a build. */
 export const migrations = [
@@ -15,4 +16,5 @@ export const migrations = [
   ListingsDistanceIndex1765000000000,
   Shortlist1765100000000,
   SavedSearches1765200000000,
+  Orders1765800000000,
 ];

@@ -49,11 +49,13 @@ export const LISTING_MOVES = {
   revise: { from: ['listed'], to: 'awaiting_review', by: 'seller', verb: 'sent for review again' },
   approve: { from: ['awaiting_review'], to: 'listed', by: 'moderator', verb: 'approved' },
   sendBack: { from: ['awaiting_review', 'listed'], to: 'sent_back', by: 'moderator', verb: 'sent back' },
-  /** A buyer has paid; the board is held for them. */
+  /** A buyer has started an order; the board is held for them while they pay and until the order ends. */
   reserve: { from: ['listed'], to: 'reserved', by: 'orders', verb: 'reserved' },
   /** The order was cancelled or refunded before hand-over. */
   release: { from: ['reserved'], to: 'listed', by: 'orders', verb: 'released' },
   sell: { from: ['reserved'], to: 'sold', by: 'orders', verb: 'marked sold' },
+  /** Refunded after hand-over: the board is with the buyer or on its way back, so it is not offered again as it was. */
+  retire: { from: ['reserved'], to: 'withdrawn', by: 'orders', verb: 'withdrawn after a refund' },
   withdraw: {
     from: ['draft', 'awaiting_review', 'listed', 'sent_back'],
     to: 'withdrawn',

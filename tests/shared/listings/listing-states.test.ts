@@ -10,6 +10,7 @@ const ALLOWED: Record<ListingMove, string[]> = {
   reserve: ['listed'],
   release: ['reserved'],
   sell: ['reserved'],
+  retire: ['reserved'],
   withdraw: ['draft', 'awaiting_review', 'listed', 'sent_back'],
   takeDown: ['draft', 'awaiting_review', 'listed', 'sent_back'],
 };
