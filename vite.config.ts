@@ -34,6 +34,7 @@ export default defineConfig({
   build: {
     outDir: 'dist/client',
     emptyOutDir: true,
+    manifest: true,
   },
   server: {
     host: '127.0.0.1',
@@ -69,10 +70,19 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: 'server',
-          include: ['tests/server/**/*.test.ts', 'tests/contract/**/*.test.ts', 'tests/security/**/*.test.ts'],
+          include: [
+            'tests/server/**/*.test.ts',
+            'tests/contract/**/*.test.ts',
+            'tests/security/**/*.test.ts',
+            'tests/reliability/**/*.test.ts',
+            'tests/budgets/**/*.test.ts',
+          ],
           environment: 'node',
           fileParallelism: false,
           globalSetup: ['tests/support/global-setup.ts'],
+          // Runs beside the browser project on two cores: starting an app can take seconds under that load.
+          hookTimeout: 60_000,
+          testTimeout: 30_000,
         },
       },
       {

@@ -24,6 +24,18 @@ import { MailDispatcher } from './features/mail/mail-dispatcher';
 import { savedSearchesRouter } from './features/saved-searches/saved-searches.router';
 import { shortlistRouter } from './features/shortlist/shortlist.router';
 import { townsRouter } from './features/towns/towns.router';
+import { conversationsRouter } from './features/conversations/conversations.router';
+import { buildStagesRouter } from './features/quotes/build-stages.router';
+import { quotesRouter } from './features/quotes/quotes.router';
+import { membersRouter, orderReviewsRouter, reviewModerationRouter } from './features/reviews/reviews.router';
+import { checkoutRouter } from './features/orders/checkout.router';
+import { OrderJobRunner } from './features/orders/order-jobs';
+import { paymentWebhookRouter } from './features/orders/payment-webhook.router';
+import { adminFeesRouter, feesRouter } from './features/orders/fees.router';
+import { orderMovesRouter } from './features/orders/order-moves.router';
+import { orderProblemsRouter } from './features/orders/order-problems.router';
+import { ordersListRouter } from './features/orders/orders-list.router';
+import { payoutsRouter } from './features/orders/payout-accounts.router';
 import { csrf, sameOriginOnly } from './http/middlewares/csrf';
 import { apiNotFound, errorHandler } from './http/middlewares/error-handler';
 import { staticClient } from './http/static-client';
@@ -71,6 +83,7 @@ export async function createApp(config: Config): Promise<AppInstance> {
       return result;
     },
   };
+  const orderJobs = new OrderJobRunner(ctx);
   const sessions = createSessionMiddleware(config, pool);
   const passport = createPassport(ctx);
   let shuttingDown = false;
@@ -100,6 +113,8 @@ export async function createApp(config: Config): Promise<AppInstance> {
   const api = express.Router();
   const health = healthRouter(ctx, () => shuttingDown);
   api.use('/health', health); // before sessions: probes must not create them
+  const paymentWebhook = paymentWebhookRouter(ctx);
+  api.use('/payments', paymentWebhook); // raw body, no session or CSRF: the provider's signature is its credential
   api.use(express.json({ limit: '100kb', strict: true }));
   api.use(sessions.middleware, sessionTimeouts(config), passport.initialize(), passport.session());
   api.use(sameOriginOnly(config.appOrigin), csrf.csrfSynchronisedProtection);
@@ -120,8 +135,22 @@ export async function createApp(config: Config): Promise<AppInstance> {
     ['/shortlist', shortlistRouter(ctx)],
     ['/saved-searches', savedSearchesRouter(ctx)],
     ['/towns', townsRouter()],
+    ['/payments', paymentWebhook],
+    ['/orders', checkoutRouter(ctx)],
+    ['/orders', ordersListRouter(ctx)],
+    ['/orders', orderMovesRouter(ctx)],
+    ['/order-problems', orderProblemsRouter(ctx)],
+    ['/payouts', payoutsRouter(ctx)],
+    ['/fees', feesRouter(ctx)],
+    ['/admin/fees', adminFeesRouter(ctx)],
+    ['/conversations', conversationsRouter(ctx)],
+    ['/orders', orderReviewsRouter(ctx)],
+    ['/members', membersRouter(ctx)],
+    ['/moderation', reviewModerationRouter(ctx)],
+    ['/quotes', quotesRouter(ctx)],
+    ['/builds', buildStagesRouter(ctx)],
   ];
-  for (const [path, router] of mounts.slice(1)) api.use(path, router);
+  for (const [path, router] of mounts.slice(1)) if (router !== paymentWebhook) api.use(path, router);
   api.use(apiNotFound);
   app.use('/api', api);
 
@@ -134,11 +163,15 @@ export async function createApp(config: Config): Promise<AppInstance> {
     app,
     apiMounts: mounts,
     ctx,
-    start: () => mailDispatcher.start(),
+    start: () => {
+      mailDispatcher.start();
+      orderJobs.start();
+    },
     beginShutdown: () => {
       shuttingDown = true;
     },
     async close() {
+      await orderJobs.stop();
       await mailDispatcher.stop();
       await sessions.close().catch(() => undefined);
       await new Promise<void>((resolve) => pool.end(() => resolve()));

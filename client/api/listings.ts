@@ -55,11 +55,8 @@ export function reportListing(id: number, input: ReportInput): Promise<{ message
   return http.post<{ message: string }>(`/api/listings/${id}/reports`, input);
 }
 
-/**
- * Other listed listings by the same seller. The search has no seller filter yet, so this looks through the newest
- * page of listings; when the API gains one, only this function changes.
- */
+/** Other listed listings by the same seller, newest first: the search's seller filter, less the one being shown. */
 export async function otherListingsBy(sellerId: number, exceptId: number, limit = 4): Promise<ListingView[]> {
-  const result = await searchListings({ sort: 'newest', pageSize: 48 });
-  return result.items.filter((l) => l.seller.id === sellerId && l.id !== exceptId).slice(0, limit);
+  const result = await searchListings({ seller: sellerId, sort: 'newest', pageSize: limit + 1 });
+  return result.items.filter((l) => l.id !== exceptId).slice(0, limit);
 }

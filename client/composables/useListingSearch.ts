@@ -1,7 +1,7 @@
 import { computed, shallowRef, watch } from 'vue';
 import { useRoute, useRouter } from 'vue-router';
 import type { ListingSearchResult } from '@shared/types/listings';
-import { searchListings } from '@/api/listings';
+import { earlyOrSearchListings } from '@/api/early';
 import { withoutAllFilters, withoutChip } from '@/utils/listings/search-chips';
 import {
   apiQueryFromFilters,
@@ -19,7 +19,7 @@ export function useListingSearch() {
   const route = useRoute();
   const router = useRouter();
   const routeName = route.name;
-  const { run, loading, error } = useAsync(searchListings);
+  const { run, loading, error } = useAsync(earlyOrSearchListings);
   const result = shallowRef<ListingSearchResult | null>(null);
 
   const filters = computed(() => filtersFromQuery(route.query));

@@ -1,5 +1,6 @@
-import { computePlan, PlanInputError, type Plan, type PlanInput } from '@shared/planner';
+import { computePlan, PlanInputError, type LengthFormat, type Plan, type PlanInput } from '@shared/planner';
 import { onScopeDispose, ref, shallowRef, watch } from 'vue';
+import { useLengthUnit } from './useLengthUnit';
 
 /** Wait after the last keystroke before planning again, ms: quick enough to feel live, few enough to stay smooth. */
 export const RECOMPUTE_DELAY_MS = 150;
@@ -10,8 +11,11 @@ const UNEXPECTED = 'The plan could not be worked out just now. Change a value to
 /**
  * Works the plan out in the browser as the input changes, a short while after the last change. A change that makes
  * the input invalid leaves the last good plan showing, with the messages per field (dotted input paths) beside it.
+ * Lengths in the plan's messages are written by the app's own formatter, in the unit the person chose.
  */
 export function usePlanComputation(source: () => PlanInput | null, delayMs = RECOMPUTE_DELAY_MS) {
+  const { unit, formatLength } = useLengthUnit();
+  const lengths: LengthFormat = (mm, precision) => formatLength(mm, { fine: precision === 'fine' });
   /** The last plan that worked out; null until one has. */
   const plan = shallowRef<Plan | null>(null);
   /** Messages by dotted input path for the current input; empty when it plans. */
@@ -29,7 +33,7 @@ export function usePlanComputation(source: () => PlanInput | null, delayMs = REC
     const input = source();
     if (input === null) return;
     try {
-      plan.value = computePlan(input);
+      plan.value = computePlan(input, { formatLength: lengths });
       fieldErrors.value = {};
       problem.value = '';
     } catch (error) {
@@ -51,7 +55,7 @@ export function usePlanComputation(source: () => PlanInput | null, delayMs = REC
   }
 
   watch(
-    source,
+    () => [source(), unit.value],
     () => {
       pending.value = true;
       clearTimeout(timer);

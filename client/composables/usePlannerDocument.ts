@@ -18,7 +18,8 @@ const UNREADABLE = 'This plan was saved by an earlier version of the planner and
 /**
  * The plan being edited on the planner page: a new one from a starting point, a saved one opened by its id, or one
  * put aside while its author signed in. Saves a new plan (then the address becomes the saved plan's) or the changes
- * to a saved one; a visitor who saves is sent to sign in, with the plan kept for this tab and saved on return.
+ * to a saved one; a visitor who names a plan to save is sent to sign in, with the plan kept for this tab, and it is
+ * saved under that name on return (the address losing its `save=1`).
  */
 export function usePlannerDocument() {
   const route = useRoute();
@@ -83,25 +84,46 @@ export function usePlannerDocument() {
     notice.value = 'Changes saved.';
   }
 
-  /** The save button: changes to a saved plan, a name for a new one, or sign in first. */
+  /** The save button: changes to a saved plan, or a name for a new one. */
   async function save(): Promise<void> {
     if (saved.value) return saveChanges();
-    if (auth.isSignedIn) {
-      nameDialogOpen.value = true;
-      return;
-    }
-    stashPlan({ input: input(), name: suggestedName.value });
+    nameDialogOpen.value = true;
+  }
+
+  /** The name dialog's action: save, or for a visitor put the plan aside under its name and go to sign in. */
+  async function saveNamed(name: string): Promise<void> {
+    if (auth.isSignedIn) return saveNew(name);
+    stashPlan({ input: input(), name });
     await router.push({ name: 'sign-in', query: { redirect: '/planner?save=1' } });
   }
 
+  /** Back from signing in to save: save at once; on failure keep the plan on screen and offer the dialog again. */
+  async function saveOnReturn(name: string): Promise<void> {
+    try {
+      await saveNew(name);
+    } catch (error) {
+      const why = error instanceof Error ? error.message : 'the server did not answer';
+      await router.replace({ name: 'planner' });
+      notice.value = `Your plan is as you left it, but it could not be saved (${why}). Save it again.`;
+      nameDialogOpen.value = true;
+    }
+  }
+
   function restoreStash(): void {
+    const asked = route.query.save === '1';
     const stash = takeStashedPlan();
     const next = stash ? draftFromInput(stash.input) : null;
-    if (!stash || !next) return;
-    adopt(next, false);
-    notice.value = 'Your plan is as you left it.';
-    if (stash.name) suggestedName.value = stash.name;
-    if (route.query.save === '1' && auth.isSignedIn) nameDialogOpen.value = true;
+    if (stash && next) {
+      adopt(next, false);
+      if (stash.name) suggestedName.value = stash.name;
+      if (asked && auth.isSignedIn) {
+        void saveOnReturn(suggestedName.value);
+        return;
+      }
+      notice.value = 'Your plan is as you left it.';
+    }
+    // Nothing to save (already saved, or the tab lost it): the address should not ask again on reload.
+    if (asked) void router.replace({ name: 'planner' });
   }
 
   watch(
@@ -131,6 +153,6 @@ export function usePlannerDocument() {
     saveError: updater.error,
     start,
     save,
-    saveNew,
+    saveNamed,
   };
 }

@@ -18,6 +18,14 @@ import { SavedSearchHit } from '../features/saved-searches/saved-search-hit.enti
 import { SavedSearch } from '../features/saved-searches/saved-search.entity';
 import { ShortlistEntry } from '../features/shortlist/shortlist-entry.entity';
 import { User } from '../features/users/user.entity';
+import { ConversationMessage } from '../features/conversations/conversation-message.entity';
+import { ConversationParticipant } from '../features/conversations/conversation-participant.entity';
+import { Conversation } from '../features/conversations/conversation.entity';
+import { Review } from '../features/reviews/review.entity';
+import { BuilderQuoteSettings } from '../features/quotes/builder-quote-settings.entity';
+import { QuoteRecipient } from '../features/quotes/quote-recipient.entity';
+import { QuoteRequest } from '../features/quotes/quote-request.entity';
+import { Quote } from '../features/quotes/quote.entity';
 
 /** Every entity, listed once so the data source and tests agree. */
 export const entities = [
@@ -41,4 +49,12 @@ export const entities = [
   PayoutAccount,
   HandledPaymentEvent,
   FeeSchedule,
+  Conversation,
+  ConversationParticipant,
+  ConversationMessage,
+  Review,
+  QuoteRequest,
+  QuoteRecipient,
+  Quote,
+  BuilderQuoteSettings,
 ];

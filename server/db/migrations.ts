@@ -6,6 +6,9 @@ import { ListingsDistanceIndex1765000000000 } from './migrations/1765000000000-l
 import { Shortlist1765100000000 } from './migrations/1765100000000-shortlist';
 import { SavedSearches1765200000000 } from './migrations/1765200000000-saved-searches';
 import { Orders1765800000000 } from './migrations/1765800000000-orders';
+import { Conversations1766000000000 } from './migrations/1766000000000-conversations';
+import { Quotes1766100000000 } from './migrations/1766100000000-quotes';
+import { Reviews1766200000000 } from './migrations/1766200000000-reviews';
 
 /** Every migration in order; listed explicitly so they run the same under tsx, Vitest and a build. */
 export const migrations = [
@@ -17,4 +20,7 @@ export const migrations = [
   Shortlist1765100000000,
   SavedSearches1765200000000,
   Orders1765800000000,
+  Conversations1766000000000,
+  Quotes1766100000000,
+  Reviews1766200000000,
 ];

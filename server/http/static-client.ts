@@ -1,17 +1,20 @@
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import express, { type Router } from 'express';
+import { compressedAssets } from './compressed-assets';
 
-/** Serve the built client, and its index.html for every other non-API path (client-side routes). */
+/**
+ * Serve the built client: its hashed assets compressed and immutable for a year, and its index.html (never cached
+ * without asking) for every other non-API path (client-side routes).
+ */
 export function staticClient(distDir: string): Router | null {
   const root = path.resolve(distDir);
   const index = path.join(root, 'index.html');
   if (!existsSync(index)) return null;
   const router = express.Router();
-  router.use(
-    '/assets',
-    express.static(path.join(root, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }),
-  );
+  const assets = path.join(root, 'assets');
+  router.use('/assets', compressedAssets(assets));
+  router.use('/assets', express.static(assets, { immutable: true, maxAge: '1y', fallthrough: false }));
   router.use(express.static(root, { index: false, maxAge: '1h' }));
   router.get('/{*splat}', (req, res, next) => {
     if (req.path.startsWith('/api/')) return next();

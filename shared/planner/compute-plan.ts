@@ -20,22 +20,42 @@ import { boardWarnings, fixingWarnings, generalWarnings, sagWarnings } from './p
 import { planWeight } from './plan/weight';
 import { planWiring, type WiringPlan } from './plan/wiring';
 import { type ParsedPlanInput, type PlanInput, planInputSchema } from './schema';
+import { lengthFormatFor, type LengthFormat, withLengthFormat } from './text/lengths';
+
+/** How the plan's messages are worded for the person reading them. */
+export interface PlanTextOptions {
+  /**
+   * Puts each length quoted in a message (warnings, suggestions, field messages) into the reader's unit. Default:
+   * feet and inches when the input's `units` is "imperial", millimetres otherwise.
+   */
+  formatLength?: LengthFormat;
+}
+
+function formatOf(input: PlanInput, options: PlanTextOptions): LengthFormat {
+  const units = typeof input === 'object' && input !== null ? (input as { units?: unknown }).units : undefined;
+  return options.formatLength ?? lengthFormatFor(units);
+}
 
 /** Parses a plan input, throwing a {@link PlanInputError} with a message per field at fault. */
-export function parsePlanInput(input: PlanInput): ParsedPlanInput {
-  const result = planInputSchema.safeParse(input);
-  if (!result.success) throw PlanInputError.fromZod(result.error);
-  return result.data;
+export function parsePlanInput(input: PlanInput, options: PlanTextOptions = {}): ParsedPlanInput {
+  return withLengthFormat(formatOf(input, options), () => {
+    const result = planInputSchema.safeParse(input);
+    if (!result.success) throw PlanInputError.fromZod(result.error);
+    return result.data;
+  });
 }
 
 /**
  * Works out a whole baseboard plan from its input: the boards, their frames and parts, cutting plans for timber and
  * sheet, fixings, wiring, weight and handling, sag, shipping, cost, schedule and safety cautions. Pure and
  * synchronous, for the browser as the user types and for the server alike. Throws {@link PlanInputError}, whose
- * `fields` are keyed by the dotted path of each field at fault.
+ * `fields` are keyed by the dotted path of each field at fault. Lengths in its messages follow `options`.
  */
-export function computePlan(input: PlanInput): Plan {
-  const parsed = parsePlanInput(input);
+export function computePlan(input: PlanInput, options: PlanTextOptions = {}): Plan {
+  return withLengthFormat(formatOf(input, options), () => planFrom(parsePlanInput(input, options)));
+}
+
+function planFrom(parsed: ParsedPlanInput): Plan {
   const layout = generateBoards(parsed);
   checkLayout(layout, parsed);
   const built = buildBoards(layout, parsed);

@@ -3,7 +3,8 @@
  * plan — boards and frames, cutting list, timber and sheet cutting plans, fixings, wiring, weight and handling, sag,
  * shipping, cost, schedule and safety — and CSV exports. Pure functions, for the browser and the server.
  */
-export { computePlan, parsePlanInput } from './compute-plan';
+export { computePlan, parsePlanInput, type PlanTextOptions } from './compute-plan';
+export { imperialLengths, metricLengths, type LengthFormat, type LengthPrecision } from './text/lengths';
 export type { Plan, PlannedBoard } from './plan-types';
 export { PlanInputError } from './errors';
 export * from './schema';

@@ -10,6 +10,7 @@ import {
   SUPPORTS,
   TOP_MATERIALS,
 } from '../listings/vocabulary';
+import { estimateModuleWeight, estimateToKg } from '../planner/estimate-module-weight';
 import { SCALE_IDS } from '../scales';
 import {
   currencyField,
@@ -21,6 +22,10 @@ import {
   townIdField,
   wholeNumber,
 } from './listing-fields';
+
+/** Whether the seller typed the weight or took the planner's estimate from the construction. */
+export const WEIGHT_SOURCES = ['entered', 'estimated'] as const;
+export type WeightSource = (typeof WEIGHT_SOURCES)[number];
 
 const mm = (what: string, range: { min: number; max: number }) => wholeNumber(what, 'mm', range.min, range.max);
 
@@ -93,10 +98,16 @@ export const handlingSchema = z
       })
       .nullable(),
     courier: z.enum(COURIER_SERVICES, { error: 'Choose parcel or pallet courier, or none.' }).nullable(),
+    /** What the buyer pays for the courier; required when a courier is offered. */
+    courierPriceMinor: minorUnits('courier price', 0, L.priceMinor.max).nullable().optional(),
   })
   .refine((h) => h.collection || h.delivery !== null || h.courier !== null, {
     error: 'Offer at least one way to get the board: collection, your own delivery, or a courier.',
     path: ['collection'],
+  })
+  .refine((h) => h.courier === null || typeof h.courierPriceMinor === 'number', {
+    error: 'Give the courier price the buyer pays (0 if you include it in the price).',
+    path: ['courierPriceMinor'],
   });
 
 /**
@@ -133,6 +144,10 @@ export const moduleListingSchema = z
       .number({ error: 'Give the weight of the heaviest board in kg.' })
       .min(L.weightKg.min, { error: `The weight must be at least ${L.weightKg.min} kg.` })
       .max(L.weightKg.max, { error: `The weight must be at most ${L.weightKg.max} kg.` }),
+    /** "estimated" only while the weight is the planner's estimate from the construction above. */
+    weightSource: z
+      .enum(WEIGHT_SOURCES, { error: 'Say whether you weighed the board (entered) or took the estimate (estimated).' })
+      .default('entered'),
   })
   .superRefine((m, ctx) => {
     for (const end of ['a', 'b'] as const) {
@@ -149,6 +164,28 @@ export const moduleListingSchema = z
         path: ['conditionNotes'],
         message: 'Say in a sentence what a buyer should know about its condition (at least 10 characters).',
       });
+    if (m.weightSource === 'estimated') checkEstimatedWeight(m, ctx);
   });
+
+/** An "estimated" weight must be the estimate from the construction as listed, so the listing page tells the truth. */
+function checkEstimatedWeight(
+  m: Parameters<typeof estimateModuleWeight>[0] & { weightKg: number },
+  ctx: z.core.$RefinementCtx,
+): void {
+  const estimate = estimateModuleWeight(m);
+  if (!estimate.ok) {
+    ctx.addIssue({ code: 'custom', path: ['weightKg'], message: `${estimate.reason} Type the weight you measured.` });
+    return;
+  }
+  const kg = estimateToKg(estimate.boardG);
+  if (Math.abs(kg - m.weightKg) > 1e-9)
+    ctx.addIssue({
+      code: 'custom',
+      path: ['weightKg'],
+      message:
+        `The construction as described now comes to an estimated ${kg} kg, not ${m.weightKg} kg: ` +
+        'take the estimate again, or type the weight you measured.',
+    });
+}
 export type ModuleListingInput = z.infer<typeof moduleListingSchema>;
 export type EndProfile = z.infer<typeof endProfileSchema>;

@@ -3,10 +3,9 @@ import { LISTING_LIMITS as L } from '../listings/limits';
 import { CONTROL_SYSTEMS, CURRENCIES, FINISHES, HANDLING_OPTIONS, LISTING_KINDS } from '../listings/vocabulary';
 import { GAUGES_MM, SCALE_IDS } from '../scales';
 import { pageField, pageSizeField } from './listing-fields';
+import { LISTING_SORTS } from '../listings/sorts';
 
-/** The orders a search can come back in. Relevance needs search words; distance needs a town. */
-export const LISTING_SORTS = ['relevance', 'newest', 'price-asc', 'price-desc', 'distance'] as const;
-export type ListingSort = (typeof LISTING_SORTS)[number];
+export { LISTING_SORTS, type ListingSort } from '../listings/sorts';
 
 /** A query-string value as a list: `scale=h0&scale=oo` and `scale=h0,oo` both give ["h0", "oo"]. */
 function toList(value: unknown): unknown {
@@ -50,6 +49,8 @@ export const listingSearchSchema = z
       .max(L.searchTextMax, { error: `Search words must be at most ${L.searchTextMax} characters.` })
       .optional(),
     kind: z.enum(LISTING_KINDS, { error: 'Kind must be module or service.' }).optional(),
+    /** One seller's listings, by their user id (the listing page's "more from this seller"). */
+    seller: queryInt('Seller', 1, 4_294_967_295),
     scale: choices(SCALE_IDS, 'scale'),
     gauge: list(gaugeItem, GAUGES_MM.length, 'gauges'),
     finish: choices(FINISHES, 'finish'),

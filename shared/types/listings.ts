@@ -3,6 +3,7 @@ import type { BuilderProfileState } from '../listings/builders';
 import type { ContactKind } from '../listings/contact-details';
 import type { ChecklistItem, Decision, ReportReason, SellerAction } from '../listings/moderation';
 import type { ListingState } from '../listings/states';
+import type { RatingSummary } from '../reviews/ratings';
 import type { BuildKind, Currency, ListingKind } from '../listings/vocabulary';
 import type { ScaleGauge } from '../scales';
 import type { ChecklistAnswers } from '../schemas/listing-moderation';
@@ -48,6 +49,8 @@ export interface ListingView {
   description: string;
   currency: Currency;
   seller: { id: number; displayName: string };
+  /** From the seller's shown reviews. */
+  sellerRating: RatingSummary;
   town: TownView;
   /** Rounded to about a kilometre: never a street address. */
   position: LatLon;

@@ -29,7 +29,7 @@ describe('the header menu', () => {
     expect(labels(mountNavFor(null))).toEqual(['Find modules', 'Frame planner', 'Sign in', 'Join']);
   });
 
-  it('offers a member selling, their listings, their shortlist, their plans, their account and signing out, and names them', () => {
+  it('offers a member selling, their listings, orders, quotes, balances, shortlist, plans, their account and signing out, and names them', () => {
     const wrapper = mountNavFor('member');
 
     expect(labels(wrapper)).toEqual([
@@ -38,6 +38,9 @@ describe('the header menu', () => {
       'Sell a module',
       'Signed in as Ada Siding',
       'My listings',
+      'Orders',
+      'Quotes',
+      'Balances',
       'My shortlist',
       'My plans',
       'My account',
@@ -46,34 +49,43 @@ describe('the header menu', () => {
     expect(wrapper.text()).toContain('Signed in as Ada Siding');
   });
 
-  it('adds the review desk and the audit trail for a moderator', () => {
+  it('adds the review desk, order problems and the audit trail for a moderator', () => {
     expect(labels(mountNavFor('moderator'))).toEqual([
       'Find modules',
       'Frame planner',
       'Sell a module',
       'Signed in as Ada Siding',
       'My listings',
+      'Orders',
+      'Quotes',
+      'Balances',
       'My shortlist',
-      'Review desk',
-      'Audit trail',
       'My plans',
+      'Review desk',
+      'Order problems',
+      'Audit trail',
       'My account',
       'Sign out',
     ]);
   });
 
-  it('adds people & roles for an administrator', () => {
+  it('adds people & roles and fees for an administrator', () => {
     expect(labels(mountNavFor('admin'))).toEqual([
       'Find modules',
       'Frame planner',
       'Sell a module',
       'Signed in as Ada Siding',
       'My listings',
+      'Orders',
+      'Quotes',
+      'Balances',
       'My shortlist',
+      'My plans',
       'Review desk',
+      'Order problems',
       'Audit trail',
       'People & roles',
-      'My plans',
+      'Fees',
       'My account',
       'Sign out',
     ]);

@@ -75,4 +75,11 @@ describe('the handling box', () => {
 
     expect(text).toContain('Too big or heavy for a parcel: it goes on a pallet.');
   });
+
+  it('says when the weight was estimated from the construction rather than weighed', () => {
+    expect(mountBox({ weightKg: 9.5, weightSource: 'estimated' }).text()).toContain(
+      '9.5 kg (one board), estimated from the construction, not weighed',
+    );
+    expect(mountBox({ weightKg: 9.5 }).text()).not.toContain('estimated from the construction');
+  });
 });

@@ -57,14 +57,30 @@ describe('the plan view of a board', () => {
     expect(wrapper.findAll('.plan-board-drawing__chain')).toHaveLength(board.frame.crossMemberCentresMm.length + 1);
   });
 
-  it('draws a lift-out with no legs, and an upper board with the legs that carry it', () => {
+  it('draws a lift-out with no legs', () => {
     const plan = computePlan(tenByThirteenTwoLevel);
     const liftOut = plan.boards.findIndex((b) => b.source === 'lift-out');
-    const upper = plan.boards.findIndex((b) => b.level === 'upper' && b.frame.support === 'carried');
 
     expect(drawBoard(plan, liftOut).wrapper.findAll('.plan-board-drawing__leg')).toHaveLength(0);
+  });
+
+  it('draws no legs under an upper board that stands on the legs of the board below, but draws those legs there', () => {
+    const plan = computePlan(tenByThirteenTwoLevel);
+    const upper = plan.boards.findIndex((b) => b.level === 'upper' && b.frame.support === 'carried');
     const carried = drawBoard(plan, upper);
-    expect(carried.wrapper.findAll('.plan-board-drawing__leg')).toHaveLength(carried.board.frame.drawing.legs.length);
+    const lower = drawBoard(
+      plan,
+      plan.boards.findIndex((b) => b.id === carried.board.carriedBy),
+    );
+
+    // The upper frame knows where the legs stand (its rail span is measured between them) …
+    expect(carried.board.frame.legPairCentresMm.length).toBeGreaterThan(0);
+    // … but they are the lower board's legs, drawn on the lower board only.
+    expect(carried.wrapper.findAll('.plan-board-drawing__leg')).toHaveLength(0);
+    expect(carried.wrapper.find('desc').text()).toContain('carried on the legs of the board below');
+    expect(carried.wrapper.find('desc').text()).not.toContain('legs inside the frame');
+    expect(lower.wrapper.findAll('.plan-board-drawing__leg')).toHaveLength(lower.board.frame.drawing.legs.length);
+    expect(lower.board.frame.drawing.legs.length).toBeGreaterThan(0);
     expect(carried.wrapper.findAll('.plan-board-drawing__cross-member')).toHaveLength(
       carried.board.frame.crossMemberCentresMm.length,
     );

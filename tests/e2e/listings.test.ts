@@ -98,6 +98,7 @@ async function describeModule(page: Page, title: string): Promise<void> {
     .first()
     .click();
   await field('Parcel courier').check();
+  await field('Courier price the buyer pays').fill('24');
   await field('Weight of the heaviest board').fill('30');
 }
 

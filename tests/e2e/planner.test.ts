@@ -79,17 +79,20 @@ describe('the frame planner in the browser', () => {
     expect(pdf.name).toBe('baseboard-plan.pdf');
     expect(pdf.bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
 
-    // A visitor saving is sent to sign in, and comes back to the same plan with the name asked for.
+    // A visitor names the plan and is sent to sign in; on return it is saved under that name, and the address is the
+    // saved plan's, without the request to save.
     const member = await buildUser(dataSource, { displayName: 'Nell Fiddleyard' });
     await page.getByRole('button', { name: 'Save to my account' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Save this plan to your account' });
+    await dialog.getByLabel('Plan name').fill('Spare room, two levels');
+    await dialog.getByRole('button', { name: 'Sign in and save' }).click();
     await page.waitForURL(/\/sign-in/);
     await page.getByLabel('E-mail address', { exact: true }).fill(member.email);
     await page.getByLabel('Password', { exact: true }).fill(GOOD_PASSWORD);
     await page.getByRole('button', { name: 'Sign in' }).click();
-    const dialog = page.getByRole('dialog', { name: 'Save this plan to your account' });
-    await dialog.getByLabel('Plan name').fill('Spare room, two levels');
-    await dialog.getByRole('button', { name: 'Save' }).click();
     await page.waitForURL(/\/planner\/\d+$/);
+    expect(new URL(page.url()).search).toBe('');
+    expect(await page.getByRole('status').filter({ hasText: 'Saved as “Spare room, two levels”.' }).count()).toBe(1);
     await page.getByRole('heading', { level: 1, name: 'Spare room, two levels' }).waitFor();
     expect(await crossMembersToCut(page)).toBeGreaterThan(before);
 
@@ -129,6 +132,16 @@ describe('the frame planner in the browser', () => {
       const planTop = await phone.page.getByRole('heading', { name: 'The plan' }).boundingBox();
       expect(inputsTop!.y).toBeLessThan(planTop!.y);
       await shoot(phone.page, 'planner-phone');
+
+      // In feet and inches, the plan's warnings quote lengths in feet and inches too: 12 mm → 1/2" (nearest 1/16 in).
+      await phone.page.getByLabel('Start from').selectOption('room');
+      await phone.page.getByRole('button', { name: 'Start', exact: true }).click();
+      await phone.page.getByRole('radiogroup', { name: 'Show lengths in' }).getByText('ft-in').click();
+      await expect
+        .poll(() => phone.page.locator('#plan-summary').innerText())
+        .toContain('The floor falls up to 1/2": each kickboard is cut that much taller');
+      expect(await phone.page.locator('#plan-summary').innerText()).not.toMatch(/\d mm\b/);
+      await shoot(phone.page, 'planner-phone-ft-in');
     } finally {
       await phone.close();
     }

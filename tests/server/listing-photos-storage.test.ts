@@ -8,7 +8,8 @@ import { jpegPhoto } from '../support/photo-fixtures';
 import { photoObjects, photoRows, photoState } from '../support/photo-storage';
 import { uploadPhoto } from '../support/photo-uploads';
 import { signedInAs } from '../support/sessions';
-import { closedPort, startStorageProxy, type ProxyDecision } from '../support/storage-proxy';
+import { startStorageProxy, type ProxyDecision } from '../support/storage-proxy';
+import { closedPort } from '../support/tcp-proxy';
 import { startTestApp } from '../support/test-app';
 import { testConfig } from '../support/test-env';
 

@@ -107,11 +107,12 @@ describe('PUT /api/listings/:id on a listed module', () => {
 
   it('keeps it listed when only the weight or handling changes', async () => {
     const listing = await buildListedListing(app.ctx, seller, moderator);
-    const res = await (
-      await signedInAs(app, seller)
-    )
-      .put(`/api/listings/${listing.id}`)
-      .send(moduleBody({ weightKg: 11, handling: { collection: true, delivery: null, courier: 'pallet' } }));
+    const res = await (await signedInAs(app, seller)).put(`/api/listings/${listing.id}`).send(
+      moduleBody({
+        weightKg: 11,
+        handling: { collection: true, delivery: null, courier: 'pallet', courierPriceMinor: 6_800 },
+      }),
+    );
     expect(res.status).toBe(200);
     expect(res.body.listing).toMatchObject({ state: 'listed', module: { weightKg: 11 } });
     const stored = await app.ctx.dataSource.getRepository(Listing).findOneByOrFail({ id: listing.id });

@@ -1,8 +1,11 @@
+import { CreateBucketCommand, HeadBucketCommand } from '@aws-sdk/client-s3';
 import { createServer } from 'node:http';
 import type { TestProject } from 'vitest/node';
 import { build } from 'vite';
 import { createApp } from '../../server/app';
+import type { Config } from '../../server/config';
 import { createDataSource } from '../../server/db/data-source';
+import { createStorage } from '../../server/lib/storage';
 import { testConfig } from './test-env';
 
 /**
@@ -11,7 +14,10 @@ import { testConfig } from './test-env';
  */
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {
   await build({ logLevel: 'warn', configFile: 'vite.config.ts' });
-  const config = testConfig({ clientDist: 'dist/client' });
+  const base = testConfig({ clientDist: 'dist/client' });
+  // Its own photo bucket, so server tests that compare the whole bucket before and after never see its uploads.
+  const config = { ...base, s3: { ...base.s3, bucket: `${base.s3.bucket}-browser` } };
+  await createBucket(config.s3);
   const dataSource = createDataSource(config.db);
   await dataSource.initialize();
   await dataSource.runMigrations({ transaction: 'each' });
@@ -30,6 +36,17 @@ export default async function setup(project: TestProject): Promise<() => Promise
     await closed;
     await instance.close();
   };
+}
+
+async function createBucket(s3: Config['s3']): Promise<void> {
+  const client = createStorage(s3);
+  try {
+    await client.send(new HeadBucketCommand({ Bucket: s3.bucket }));
+  } catch {
+    await client.send(new CreateBucketCommand({ Bucket: s3.bucket }));
+  } finally {
+    client.destroy();
+  }
 }
 
 declare module 'vitest' {

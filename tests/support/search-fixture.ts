@@ -46,7 +46,7 @@ export async function buildSearchFixture(app: AppInstance): Promise<SearchFixtur
     priceMinor: 9_000,
     finish: 'track-laid',
     wiring: { control: 'dc', busWireMm2: 1, boardConnectors: 'Terminal strips' },
-    handling: { ...noHandling, courier: 'parcel' },
+    handling: { ...noHandling, courier: 'parcel', courierPriceMinor: 1_500 },
     townId: TOWNS.manchester,
     endProfiles: { a: end([100]), b: end([100]) },
   });
@@ -73,7 +73,7 @@ export async function buildSearchFixture(app: AppInstance): Promise<SearchFixtur
     finish: 'bare-frame',
     wiring: null,
     construction: { ...moduleBody().construction, topMaterial: 'none', topThicknessMm: null },
-    handling: { ...noHandling, courier: 'pallet' },
+    handling: { ...noHandling, courier: 'pallet', courierPriceMinor: 6_000 },
     townId: TOWNS.york,
     endProfiles: { a: end([]), b: end([]) },
   });

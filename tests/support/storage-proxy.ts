@@ -1,11 +1,10 @@
 import http, { type IncomingMessage } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import net from 'node:net';
 
 /**
  * A pass-through proxy in front of the test S3 server, to stage storage failures without touching the shared
  * service: `decide` sees each request first and may fail it with 503 (as a struggling store answers) or run
- * something before it is passed on.
+ * something before it is passed on. A whole-service outage (connections refused) is staged with tcp-proxy.ts.
  */
 export interface StorageProxy {
   endpoint: string;
@@ -46,13 +45,4 @@ export async function startStorageProxy(
         server.closeAllConnections();
       }),
   };
-}
-
-/** A local port with nothing listening on it: storage "down". */
-export async function closedPort(): Promise<number> {
-  const probe = net.createServer();
-  await new Promise<void>((resolve) => probe.listen(0, '127.0.0.1', resolve));
-  const { port } = probe.address() as AddressInfo;
-  await new Promise((resolve) => probe.close(resolve));
-  return port;
 }

@@ -55,8 +55,15 @@ export function handlingSummary(m: ModuleDetailsView, currency: Currency, townNa
       cost: price === 0 ? 'Free' : formatMoney(price, currency),
     });
   }
+  const courierPrice = handling.courierPriceMinor;
+  const courierCost = (unpriced: string) =>
+    typeof courierPrice === 'number' ? (courierPrice === 0 ? 'Free' : formatMoney(courierPrice, currency)) : unpriced;
   if (carriage.kind === 'parcel')
-    ways.push({ label: `Parcel courier, charged on ${kgText(carriage.chargeableKg)}`, cost: 'The courier’s price' });
-  if (carriage.kind === 'pallet') ways.push({ label: 'Pallet courier', cost: 'The pallet service’s price' });
+    ways.push({
+      label: `Parcel courier, charged on ${kgText(carriage.chargeableKg)}`,
+      cost: courierCost('The courier’s price'),
+    });
+  if (carriage.kind === 'pallet')
+    ways.push({ label: 'Pallet courier', cost: courierCost('The pallet service’s price') });
   return { weightKg: m.weightKg, lift, carriage, ways };
 }

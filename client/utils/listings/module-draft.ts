@@ -50,7 +50,10 @@ export interface ModuleDraft {
   'handling.delivery.withinKm': string;
   'handling.delivery.priceMinor': string;
   'handling.courier': '' | 'parcel' | 'pallet';
+  'handling.courierPriceMinor': string;
   weightKg: string;
+  /** "estimated" while the weight is the planner's estimate, following the construction as it is typed. */
+  weightSource: 'entered' | 'estimated';
 }
 
 /** Single lengths typed in the person's unit. */
@@ -107,7 +110,9 @@ export function blankModuleDraft(): ModuleDraft {
     'handling.delivery.withinKm': '',
     'handling.delivery.priceMinor': '',
     'handling.courier': '',
+    'handling.courierPriceMinor': '',
     weightKg: '',
+    weightSource: 'entered',
   };
 }
 
@@ -162,7 +167,9 @@ export function moduleDraftFrom(
     'handling.delivery.withinKm': m.handling.delivery ? String(m.handling.delivery.withinKm) : '',
     'handling.delivery.priceMinor': moneyForInput(m.handling.delivery?.priceMinor),
     'handling.courier': m.handling.courier ?? '',
+    'handling.courierPriceMinor': moneyForInput(m.handling.courierPriceMinor ?? undefined),
     weightKg: String(m.weightKg),
+    weightSource: m.weightSource,
   };
 }
 

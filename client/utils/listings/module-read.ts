@@ -80,8 +80,10 @@ export function readModuleDraft(d: ModuleDraft, unit: LengthUnit): ReadDraft {
           }
         : null,
       courier: d['handling.courier'] || null,
+      courierPriceMinor: d['handling.courier'] ? money('handling.courierPriceMinor') : null,
     },
     weightKg: numberOrMissing(d.weightKg),
+    weightSource: d.weightSource,
   };
   return { input, problems };
 }
@@ -90,6 +92,8 @@ export function readModuleDraft(d: ModuleDraft, unit: LengthUnit): ReadDraft {
 export function rewordMoney(field: string, message: string): string {
   if (!message.includes('pence')) return message;
   if (field === 'priceMinor') return 'Give the price in pounds, from 0.01 up to 100000, e.g. 180 or 179.50.';
+  if (field === 'handling.courierPriceMinor')
+    return 'Give the courier price in pounds (0 if your price includes it), e.g. 24 or 12.50.';
   if (field.endsWith('priceMinor')) return 'Give the delivery price in pounds (0 for free), e.g. 25 or 12.50.';
   return message.replace(/in (whole )?pence or cents, e\.g\. 12500 for 125\.00/, 'in pounds, e.g. 125');
 }

@@ -11,7 +11,7 @@ import {
   type ListingKind,
 } from '@shared/listings/vocabulary';
 import { GAUGES_MM, SCALE_IDS } from '@shared/scales';
-import { LISTING_SORTS, type ListingSort } from '@shared/schemas/listing-search';
+import { LISTING_SORTS, type ListingSort } from '@shared/listings/sorts';
 import type { QueryParams } from '@/api/http';
 
 /** A search as the page holds it; the address bar holds the same, so a search can be shared and reloaded. */

@@ -1,4 +1,5 @@
 import type { BoardWiring, PlannedBoard } from '@shared/planner';
+import { ownLegs } from './board-drawing';
 
 type Format = (mm: number, options?: { fine?: boolean }) => string;
 
@@ -18,7 +19,8 @@ export function boardDescription(board: PlannedBoard, wiring: BoardWiring | unde
     `Ladder frame: two side rails and two end rails, with ${frame.crossMemberCentresMm.length} cross members` +
       (centres ? ` at ${centres} from the start end.` : '.'),
   ];
-  if (frame.drawing.legs.length > 0) parts.push(`${frame.drawing.legs.length} legs inside the frame.`);
+  const legs = ownLegs(board).length;
+  if (legs > 0) parts.push(`${legs} legs inside the frame.`);
   if (frame.bracketCentresMm.length > 0) parts.push(`${frame.bracketCentresMm.length} brackets.`);
   if (wiring) {
     parts.push(

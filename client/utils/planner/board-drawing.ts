@@ -40,6 +40,14 @@ export interface BoardDrawingModel {
 }
 
 /**
+ * The legs drawn under a board: only its own. An upper board carried by the legs of the board below stands on them,
+ * so its frame has their positions (for its rail span) but no legs of its own to draw.
+ */
+export function ownLegs(board: PlannedBoard): PlanRect[] {
+  return board.frame.support === 'legs' ? board.frame.drawing.legs : [];
+}
+
+/**
  * Lays a board's frame, wiring and drilling template out for drawing. The frame already gives its members in the
  * board's own coordinates; the wiring is measured along the longer side and across from the front edge, so it is
  * turned into the same coordinates here.
@@ -74,6 +82,7 @@ export function boardDrawingModel(board: PlannedBoard, wiring: BoardWiring | und
     widthMm: board.widthMm,
     alongX: frame.railsAlongLength,
     ...frame.drawing,
+    legs: ownLegs(board),
     wires,
     holes,
     droppers,

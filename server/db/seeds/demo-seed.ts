@@ -5,6 +5,7 @@ import { User } from '../../features/users/user.entity';
 import { DEMO_ACCOUNTS, DEMO_SELLERS, type DemoAccount } from './demo-accounts';
 import { DEMO_BUILDER_PROFILES } from './demo-builders';
 import { seedDemoListings, type DemoListingsReport } from './demo-listings';
+import { seedDemoQuoteRequest } from './demo-quotes';
 
 /** The moderator who decides on the demo's listings. */
 const DEMO_MODERATOR = 'tobias@hollinbridge-modellers.test';
@@ -79,9 +80,11 @@ export async function seedDemo(ctx: AppContext): Promise<DemoSeedReport> {
   const users = new Map(results.map(({ user }) => [user.email, user]));
   const moderator = users.get(DEMO_MODERATOR)!;
   await ensureBuilderProfiles(ctx, users, moderator);
+  const listings = await seedDemoListings(ctx, users, moderator);
+  await seedDemoQuoteRequest(ctx, users);
   return {
     accounts: accounts.length,
     accountsChanged: results.filter((r) => r.changed).length,
-    listings: await seedDemoListings(ctx, users, moderator),
+    listings,
   };
 }

@@ -40,6 +40,8 @@ function applyModule(l: Listing, input: ModuleListingInput): void {
       ? { busWireMm2: input.wiring.busWireMm2, boardConnectors: input.wiring.boardConnectors }
       : null,
     conditionNotes: input.conditionNotes,
+    courierPriceMinor: input.handling.courier ? (input.handling.courierPriceMinor ?? null) : null,
+    weightSource: input.weightSource,
   };
   l.details = details;
 }
@@ -94,8 +96,10 @@ export function moduleDetailsOf(l: Listing): ModuleDetailsView | null {
       collection: l.offersCollection ?? false,
       delivery: l.deliveryKm !== null ? { withinKm: l.deliveryKm, priceMinor: l.deliveryPriceMinor ?? 0 } : null,
       courier: l.courier,
+      courierPriceMinor: l.courier ? (d.courierPriceMinor ?? null) : null,
     },
     weightKg: (l.weightG ?? 0) / 1000,
+    weightSource: d.weightSource ?? 'entered',
   };
 }
 

@@ -2,6 +2,7 @@ import type { DecisionView, ListingSearchItem, ListingView, OwnListingView } fro
 import type { TownView } from '../../../shared/types/towns';
 import type { ListingPhoto } from '../photos/listing-photo.entity';
 import { presentGallery } from '../photos/photo.presenter';
+import { ratingOf } from '../reviews/review.presenter';
 import { presentTown, type Gazetteer } from '../towns/gazetteer';
 import type { User } from '../users/user.entity';
 import type { ListingDecision } from './listing-decision.entity';
@@ -31,6 +32,7 @@ export function presentListing(
     description: l.description,
     currency: l.currency,
     seller: { id: l.ownerId, displayName: l.owner?.displayName ?? '' },
+    sellerRating: ratingOf(l.owner),
     town: townOf(l, towns),
     position: { lat: l.latitude, lon: l.longitude },
     module: moduleDetailsOf(l),

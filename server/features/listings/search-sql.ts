@@ -82,6 +82,8 @@ function filters(
   const c = new Conditions();
   if (onlyListingId !== undefined) c.add('l.id = ?', onlyListingId);
   c.add("l.state = 'listed'");
+  // With the state, this reads one seller's listed listings straight from ix_listings_owner_state.
+  if (q.seller !== undefined) c.add('l.owner_id = ?', q.seller);
   c.add('u.suspended_at IS NULL');
   if (text?.fulltext) c.add(MATCH, text.fulltext);
   for (const word of text?.shortWords ?? []) {

@@ -37,6 +37,14 @@ export class User {
   @Column({ name: 'last_sign_in_at', type: 'datetime', precision: 3, nullable: true })
   lastSignInAt: Date | null;
 
+  /** How many shown reviews rate this member; kept with each review added, hidden or shown again. */
+  @Column({ name: 'rating_count', type: 'int', unsigned: true, default: 0 })
+  ratingCount: number;
+
+  /** The stars of those reviews added up; the average is rating_sum / rating_count. */
+  @Column({ name: 'rating_sum', type: 'int', unsigned: true, default: 0 })
+  ratingSum: number;
+
   @CreatedAtColumn()
   createdAt: Date;
 

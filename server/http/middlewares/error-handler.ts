@@ -7,9 +7,31 @@ interface HttpLikeError {
   type?: string;
   code?: string;
   expose?: boolean;
+  /** Set by the MariaDB driver (mysql2) on errors that end a connection: refused, lost, timed out. */
+  fatal?: boolean;
 }
 
-/** Errors thrown by libraries (body parser, CSRF check) mapped to our codes and words. */
+/** The database cannot be reached: the request was not wrong, and nothing it asked for was done. */
+const databaseUnavailable = () =>
+  new AppError(
+    503,
+    'database_unavailable',
+    'Benchwright cannot reach its database just now. Nothing was changed; please try again in a minute.',
+    undefined,
+    30,
+  );
+
+/** The payments provider cannot be reached (its SDK gave up connecting): nothing was charged or set up. */
+const paymentsUnavailable = () =>
+  new AppError(
+    503,
+    'payments_unavailable',
+    'Payments cannot be reached just now. Nothing was changed; please try again in a few minutes.',
+    undefined,
+    60,
+  );
+
+/** Errors thrown by libraries (body parser, CSRF check, database and payments drivers) mapped to our codes and words. */
 function fromLibrary(error: HttpLikeError): AppError | null {
   if (error.type === 'entity.parse.failed')
     return new AppError(400, 'malformed_json', 'The request body is not valid JSON.');
@@ -20,6 +42,8 @@ function fromLibrary(error: HttpLikeError): AppError | null {
   if (error.code === 'EBADCSRFTOKEN') {
     return new AppError(403, 'csrf_invalid', 'Your session check failed. Reload the page and try again.');
   }
+  if (error.fatal === true && typeof error.code === 'string') return databaseUnavailable();
+  if (error.type === 'StripeConnectionError') return paymentsUnavailable();
   const status = error.status ?? error.statusCode;
   if (status && status >= 400 && status < 500 && error.expose) {
     return new AppError(status, 'bad_request', 'The request could not be understood.');

@@ -1,3 +1,4 @@
+import { lengthText as len } from '../text/lengths';
 import { EngineeringInputError, requireFinite, requirePositive } from './checks';
 import { standardSection } from './materials';
 import {
@@ -71,20 +72,25 @@ function holeWarnings(input: BusRunsInput, runs: BusRun[], diameterMm: number): 
   const [lo, hi] = [rail + diameterMm / 2, input.boardWidthMm - rail - diameterMm / 2];
   const warnings = runs
     .filter((r) => r.acrossMm < lo || r.acrossMm > hi)
-    .map((r) => `The ${r.name} hole at ${r.acrossMm} mm is not within the cross member (${lo}–${hi} mm); move it.`);
+    .map(
+      (r) =>
+        `The ${r.name} hole at ${len(r.acrossMm)} is not within the cross member (${len(lo)} to ${len(hi)}); move it.`,
+    );
   const minCentres = HOLE_RULES.minCentresInDiameters * diameterMm;
   const sorted = [...runs].sort((a, b) => a.acrossMm - b.acrossMm);
   sorted.slice(1).forEach((run, i) => {
     const prev = sorted[i] as BusRun;
     const gap = run.acrossMm - prev.acrossMm;
     if (gap < minCentres) {
-      warnings.push(`The ${prev.name} and ${run.name} holes are ${gap} mm apart; keep them ${minCentres} mm apart.`);
+      warnings.push(
+        `The ${prev.name} and ${run.name} holes are ${len(gap)} apart; keep them ${len(minCentres)} apart.`,
+      );
     }
   });
   const depth = input.crossMemberDepthMm;
   if (depth !== undefined && diameterMm > HOLE_RULES.maxFractionOfDepth * depth) {
     warnings.push(
-      `A ${diameterMm} mm hole is more than a quarter of the ${depth} mm cross-member depth; ` +
+      `A ${len(diameterMm, 'fine')} hole is more than a quarter of the ${len(depth)} cross-member depth; ` +
         'use thinner wire or deeper cross members.',
     );
   }

@@ -1,3 +1,4 @@
+import { lengthText as len } from '../text/lengths';
 import { requireNonNegative, requirePositive } from './checks';
 import { SCREWS_PER_BUTT_JOINT, SCREWS_PER_LEG, TOP_SCREW_SPACING_MM } from './fixings-data';
 import type { SectionSize } from './materials';
@@ -56,12 +57,12 @@ function topSheet(input: FrameFixingInput): JointFixing {
   const count = topSheetScrewCount(input.boardLengthMm, input.boardWidthMm, input.crossMemberCount);
   return {
     joint: 'top-sheet',
-    description: `Top sheet to frame: through the ${input.topSheetThicknessMm} mm sheet into the rails' top edges`,
+    description: `Top sheet to frame: through the ${len(input.topSheetThicknessMm)} sheet into the rails' top edges`,
     screw: screwFor({ fixedThicknessMm: input.topSheetThicknessMm, baseDepthMm: input.rail.widthMm }),
     perJoint: 1,
     joints: count,
     total: count,
-    note: `Every ${TOP_SCREW_SPACING_MM} mm around the edge and along each cross member; countersink so no head stands proud.`,
+    note: `Every ${len(TOP_SCREW_SPACING_MM)} around the edge and along each cross member; countersink so no head stands proud.`,
   };
 }
 

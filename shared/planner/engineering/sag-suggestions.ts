@@ -1,6 +1,6 @@
 import { deeperSections, type SectionSize, thickerSheets } from './materials';
 import { type RailSagInput, railSag, type SheetSagInput, sheetSag } from './sag-deflection';
-import { formatFeetInches } from './units';
+import { lengthText } from '../text/lengths';
 
 /** A change that makes a failing sag check pass, worked out for the board in hand. */
 export type SagSuggestion =
@@ -39,7 +39,7 @@ function moreLegs(input: RailSagInput): SagSuggestion | undefined {
     if (!railSag({ ...input, spanMm }).passes) continue;
     const extraLegs = bays - 1;
     const legs = extraLegs === 1 ? 'leg' : 'legs';
-    const spans = `${bays} equal spans of ${Math.round(spanMm)} mm (${formatFeetInches(spanMm)})`;
+    const spans = `${bays} equal spans of ${lengthText(spanMm)}`;
     return {
       kind: 'more-legs',
       extraLegs,
@@ -47,7 +47,7 @@ function moreLegs(input: RailSagInput): SagSuggestion | undefined {
       maxSpanMm,
       message:
         `Add ${extraLegs} more ${legs} (or other supports) under this rail, evenly spaced, to make ${spans}; ` +
-        `it may span up to ${maxSpanMm} mm.`,
+        `it may span up to ${lengthText(maxSpanMm)}.`,
     };
   }
   return undefined;
@@ -57,13 +57,13 @@ function deeperSection(input: RailSagInput, candidates: readonly SectionSize[]):
   for (const section of deeperSections(input.section, candidates)) {
     const result = railSag({ ...input, section });
     if (!result.passes) continue;
-    const size = `${section.widthMm} × ${section.thicknessMm} mm`;
+    const size = `${lengthText(section.widthMm)} × ${lengthText(section.thicknessMm)}`;
     const named = 'nominal' in section ? `${String(section.nominal)} (${size})` : size;
     return {
       kind: 'deeper-section',
       section,
       deflectionMm: result.deflectionMm,
-      message: `Use ${named} on edge for this rail: it sags ${result.deflectionMm.toFixed(1)} mm.`,
+      message: `Use ${named} on edge for this rail: it sags ${lengthText(result.deflectionMm, 'fine')}.`,
     };
   }
   return undefined;
@@ -84,7 +84,7 @@ function closerCrossMembers(input: SheetSagInput): SagSuggestion | undefined {
   return {
     kind: 'closer-cross-members',
     spacingMm,
-    message: `Put the cross members at ${spacingMm} mm centres or closer (${formatFeetInches(spacingMm)}).`,
+    message: `Put the cross members at ${lengthText(spacingMm)} centres or closer.`,
   };
 }
 
@@ -96,7 +96,9 @@ function thickerSheet(input: SheetSagInput, thicknessesMm: readonly number[]): S
       kind: 'thicker-sheet',
       thicknessMm,
       deflectionMm: result.deflectionMm,
-      message: `Use ${thicknessMm} mm sheet: between these cross members it sags ${result.deflectionMm.toFixed(1)} mm.`,
+      message:
+        `Use ${lengthText(thicknessMm)} sheet: between these cross members it sags ` +
+        `${lengthText(result.deflectionMm, 'fine')}.`,
     };
   }
   return undefined;

@@ -1,3 +1,4 @@
+import { lengthText as len } from '../text/lengths';
 import { EngineeringInputError, requirePositive } from './checks';
 import {
   COUNTERSINK_FACTOR,
@@ -79,15 +80,16 @@ export function screwFor(joint: ScrewJoint): ScrewChoice {
   if (lengthMm === undefined) {
     return {
       ok: false,
-      reason: `A piece ${fixed} mm thick needs a screw over ${Math.max(...STOCK_SCREW_LENGTHS_MM)} mm; bolt it instead.`,
+      reason: `A piece ${len(fixed)} thick needs a screw over ${len(Math.max(...STOCK_SCREW_LENGTHS_MM))}; bolt it instead.`,
     };
   }
   if (lengthMm > fitsMm) {
     return {
       ok: false,
       reason:
-        `A piece ${fixed} mm thick needs a ${lengthMm} mm screw to get two-thirds of it into the base, but the base is only ` +
-        `${base} mm deep, so the point would come through. Fix from the other side, use a deeper base piece, or bolt it.`,
+        `A piece ${len(fixed)} thick needs a ${len(lengthMm)} screw to get two-thirds of it into the base, but the base ` +
+        `is only ${len(base)} deep, so the point would come through. Fix from the other side, use a deeper base ` +
+        'piece, or bolt it.',
     };
   }
   const gauge = screwGauge(joint.gaugeMm ?? gaugeFor(lengthMm));

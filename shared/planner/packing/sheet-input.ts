@@ -1,3 +1,4 @@
+import { lengthText as len } from '../text/lengths';
 import { PlannerInputError } from './errors';
 import { requireInteger, requirePieceCount, requirePricesAllOrNone, requireUniqueIds } from './input-checks';
 import type { SheetCuttingInput, SheetStock } from './sheet-types';
@@ -60,11 +61,12 @@ export function toSheetProblem(input: SheetCuttingInput): SheetProblem {
 }
 
 function tooLarge(piece: SheetPiece, kinds: readonly SheetStock[]): PlannerInputError {
-  const sizes = kinds.map((k) => `${k.width} × ${k.height}`).join(', ');
+  const sizes = kinds.map((k) => `${len(k.width)} × ${len(k.height)}`).join(', ');
   const turn = piece.canRotate ? 'either way round' : 'with its grain along the sheet';
   return new PlannerInputError(
     'part-too-large',
-    `Part "${piece.partId}" (${piece.width} × ${piece.height} mm) does not fit a ${sizes} mm sheet ${turn}; ` +
+    `The ${piece.label?.toLowerCase() ?? `part "${piece.partId}"`} (${len(piece.width)} × ${len(piece.height)}) does not fit a ` +
+      `${sizes} sheet ${turn}; ` +
       'choose a larger sheet, allow turning it, or split the part.',
     piece.partId,
   );

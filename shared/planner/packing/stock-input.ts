@@ -1,3 +1,4 @@
+import { lengthText as len } from '../text/lengths';
 import { PlannerInputError } from './errors';
 import { requireInteger, requirePieceCount, requirePricesAllOrNone, requireUniqueIds } from './input-checks';
 import type { StockCuttingInput, StockLength } from './stock-types';
@@ -43,7 +44,8 @@ export function toLinearProblem(input: StockCuttingInput): LinearProblem {
     if (part.quantity > 0 && part.length > maxRoom) {
       throw new PlannerInputError(
         'part-too-long',
-        `Part "${part.id}" is ${part.length} mm long but the longest stock gives ${maxRoom} mm; ` +
+        `The ${part.label?.toLowerCase() ?? `part "${part.id}"`} is ${len(part.length)} long but the longest timber on sale gives ` +
+          `${len(maxRoom)}; ` +
           'add a longer stock length or split the part into two with a joint.',
         part.id,
       );

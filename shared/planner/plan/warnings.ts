@@ -1,5 +1,6 @@
 import type { LayoutBoard } from '../boards/types';
 import type { SupportKind } from '../frame/types';
+import { lengthText } from '../text/lengths';
 import type { FixingsPlan } from './fixings';
 import type { BoardSag } from './sag';
 import type { WeightPlan } from './weight';
@@ -18,7 +19,8 @@ function grouped(notes: readonly BoardNote[]): string[] {
   return [...byMessage.entries()].map(([message, boards]) => `${boards.join(', ')}: ${message}`);
 }
 
-const mm = (value: number) => `${value.toFixed(1)} mm`;
+/** A sag, to a tenth of a millimetre or 1/32 in. */
+const sagText = (value: number) => lengthText(value, 'fine');
 
 const SPAN_WORDS: Readonly<Record<SupportKind, string>> = {
   legs: 'between legs',
@@ -34,13 +36,13 @@ export function sagWarnings(sag: readonly BoardSag[], names: ReadonlyMap<string,
     const found: BoardNote[] = [];
     if (!rail.passes) {
       const fixes = rail.suggestions.map((s) => s.message).join(' Or: ');
-      const sags = `A side rail sags ${mm(rail.deflectionMm)} over ${Math.round(rail.spanMm)} mm ${SPAN_WORDS[rail.supportedBy]}`;
-      found.push({ board, message: `${sags}, more than the ${mm(rail.limitMm)} allowed. ${fixes}` });
+      const sags = `A side rail sags ${sagText(rail.deflectionMm)} over ${lengthText(rail.spanMm)} ${SPAN_WORDS[rail.supportedBy]}`;
+      found.push({ board, message: `${sags}, more than the ${sagText(rail.limitMm)} allowed. ${fixes}` });
     }
     if (sheet !== null && !sheet.passes) {
       const fixes = sheet.suggestions.map((s) => s.message).join(' Or: ');
-      const sags = `The top sags ${mm(sheet.deflectionMm)} between cross members`;
-      found.push({ board, message: `${sags}, more than the ${mm(sheet.limitMm)} allowed. ${fixes}` });
+      const sags = `The top sags ${sagText(sheet.deflectionMm)} between cross members`;
+      found.push({ board, message: `${sags}, more than the ${sagText(sheet.limitMm)} allowed. ${fixes}` });
     }
     return found;
   });
@@ -90,7 +92,7 @@ export function generalWarnings(
   const warnings: string[] = [];
   if (options.floorFallMm > 0) {
     warnings.push(
-      `The floor falls up to ${options.floorFallMm} mm: each kickboard is cut that much taller to scribe down to ` +
+      `The floor falls up to ${lengthText(options.floorFallMm)}: each kickboard is cut that much taller to scribe down to ` +
         'the floor; level each board by packing or trimming its legs.',
     );
   }

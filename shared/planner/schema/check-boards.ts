@@ -1,4 +1,5 @@
 import { MIN_LEVEL_CLEARANCE_MM, MIN_ROOM_BETWEEN_LEGS_MM } from '../defaults';
+import { lengthText as len } from '../text/lengths';
 import type { CheckContext, FieldProblem } from './check-context';
 
 /** The narrowest board whose frame and legs fit across it, mm. */
@@ -20,7 +21,7 @@ export function explicitBoardProblems(ctx: CheckContext): FieldProblem[] {
     if (board.id !== undefined && seen.has(board.id)) {
       problems.push({
         path: ['boards', i, 'id'],
-        message: `Board id "${board.id}" is used twice; give each board its own.`,
+        message: `Two boards have the id "${board.id}"; give each board its own.`,
       });
     }
     if (board.id !== undefined) seen.add(board.id);
@@ -28,7 +29,8 @@ export function explicitBoardProblems(ctx: CheckContext): FieldProblem[] {
       problems.push({
         path: ['boards', i, 'level'],
         message:
-          'An upper board needs secondLevel to say how far above the lower level it is; add it, or make it lower.',
+          'An upper-level board needs a second level, to say how far above the lower level it is; add one, or put ' +
+          'the board on the lower level.',
       });
     }
   });
@@ -40,20 +42,20 @@ function boardSizeProblems(board: { lengthMm: number; widthMm: number }, i: numb
   if (board.lengthMm > ctx.sheetLongMm) {
     problems.push({
       path: ['boards', i, 'lengthMm'],
-      message: `Board length must be at most ${ctx.sheetLongMm} mm, the sheet’s length, so its top is one piece; split it in two.`,
+      message: `Board length must be at most ${len(ctx.sheetLongMm)}, the sheet’s length, so its top is one piece; split it in two.`,
     });
   }
   if (board.widthMm > ctx.sheetShortMm) {
     problems.push({
       path: ['boards', i, 'widthMm'],
-      message: `Board width must be at most ${ctx.sheetShortMm} mm, the sheet’s width, so its top is one piece.`,
+      message: `Board width must be at most ${len(ctx.sheetShortMm)}, the sheet’s width, so its top is one piece.`,
     });
   }
   const narrowest = narrowestBoardMm(ctx);
   if (Math.min(board.lengthMm, board.widthMm) < narrowest) {
     problems.push({
       path: ['boards', i, 'widthMm'],
-      message: `Board width must be at least ${narrowest} mm to fit the frame and legs across it.`,
+      message: `Board width must be at least ${len(narrowest)} to fit the frame and legs across it.`,
     });
   }
   return problems;
@@ -69,14 +71,14 @@ export function secondLevelProblems(ctx: CheckContext): FieldProblem[] {
     problems.push({
       path: ['secondLevel', 'heightAboveMm'],
       message:
-        `Height between levels must be at least ${least} mm: the upper frame and top take ${ctx.boardDepthMm} mm ` +
+        `Height between levels must be at least ${len(least)}: the upper frame and top take ${len(ctx.boardDepthMm)} ` +
         'and trains need room beneath.',
     });
   }
   if (second.which === 'selected' && (second.boardIds ?? []).length === 0) {
     problems.push({
       path: ['secondLevel', 'boardIds'],
-      message: 'List the boards to build over in boardIds, or choose "same-footprint".',
+      message: 'Choose the boards to build the second level over, or build it over every board.',
     });
   }
   return problems;
@@ -95,7 +97,7 @@ export function underBoardProblems(ctx: CheckContext): FieldProblem[] {
       .filter(([key]) => input[key] !== undefined)
       .map(([key, label]) => ({
         path: [key],
-        message: `${label} legs to fix to; choose legs under construction.supports, or remove it.`,
+        message: `${label} legs to fix to; stand the boards on legs, or remove it.`,
       }));
   }
   const problems: FieldProblem[] = [];
@@ -104,14 +106,14 @@ export function underBoardProblems(ctx: CheckContext): FieldProblem[] {
   if (shelf !== undefined && shelf.heightMm + shelf.sheetThicknessMm > underFrameMm) {
     problems.push({
       path: ['lowerShelf', 'heightMm'],
-      message: `Lower shelf height must be at most ${Math.floor(underFrameMm - shelf.sheetThicknessMm)} mm, below the frame.`,
+      message: `Lower shelf height must be at most ${len(Math.floor(underFrameMm - shelf.sheetThicknessMm))}, below the frame.`,
     });
   }
   const kick = input.kickboards;
   if (kick !== undefined && kick.heightMm + kick.floorFallMm > underFrameMm) {
     problems.push({
       path: ['kickboards', 'heightMm'],
-      message: `Kickboard height and floor fall together must be at most ${underFrameMm} mm, the space under the frame.`,
+      message: `Kickboard height and floor fall together must be at most ${len(underFrameMm)}, the space under the frame.`,
     });
   }
   return problems;

@@ -14,7 +14,7 @@ export function pricingProblems(ctx: CheckContext): FieldProblem[] {
     const keys = new Set<string>();
     supplier.items.forEach((item, j) => {
       if (keys.has(item.itemKey)) {
-        const message = `"${item.itemKey}" is priced twice by ${supplier.name}; keep one price.`;
+        const message = `This item is priced twice by ${supplier.name}; keep one price.`;
         problems.push({ path: ['pricing', 'suppliers', i, 'items', j, 'itemKey'], message });
       }
       keys.add(item.itemKey);

@@ -1,4 +1,5 @@
 import { PLAN_LIMITS } from '../limits';
+import { lengthText as len } from '../text/lengths';
 import { wallRun, type RoomShape } from '../boards/room-runs';
 import { narrowestBoardMm } from './check-boards';
 import type { CheckContext, FieldProblem } from './check-context';
@@ -27,15 +28,15 @@ export function roomProblems(ctx: CheckContext): FieldProblem[] {
   if (problems.length > 0) return problems;
   const shape = roomShape(room);
   if (room.shelfDepthMm > ctx.sheetShortMm) {
-    const message = `Shelf depth must be at most ${ctx.sheetShortMm} mm, the sheet’s width, so each top is one piece.`;
+    const message = `Shelf depth must be at most ${len(ctx.sheetShortMm)}, the sheet’s width, so each top is one piece.`;
     problems.push({ path: ['room', 'shelfDepthMm'], message });
   }
   if (room.shelfDepthMm < narrowestBoardMm(ctx)) {
-    const message = `Shelf depth must be at least ${narrowestBoardMm(ctx)} mm to fit the frame and legs across it.`;
+    const message = `Shelf depth must be at least ${len(narrowestBoardMm(ctx))} to fit the frame and legs across it.`;
     problems.push({ path: ['room', 'shelfDepthMm'], message });
   }
   if (room.maxBoardLengthMm > ctx.sheetLongMm) {
-    const message = `Longest board must be at most ${ctx.sheetLongMm} mm, the sheet’s length, so each top is one piece.`;
+    const message = `Longest board must be at most ${len(ctx.sheetLongMm)}, the sheet’s length, so each top is one piece.`;
     problems.push({ path: ['room', 'maxBoardLengthMm'], message });
   }
   for (const i of shape.useWalls) {
@@ -44,8 +45,8 @@ export function roomProblems(ctx: CheckContext): FieldProblem[] {
       problems.push({
         path: ['room', 'walls', i, 'lengthMm'],
         message:
-          `Wall "${room.walls[i]!.name}" leaves ${toMm - fromMm} mm of shelf past the corner; it needs at least ` +
-          `${minBoardLengthMm} mm. Make the shelf shallower or leave the wall out.`,
+          `Wall "${room.walls[i]!.name}" leaves ${len(toMm - fromMm)} of shelf past the corner; it needs at least ` +
+          `${len(minBoardLengthMm)}. Make the shelf shallower or leave the wall out.`,
       });
     }
   }
@@ -58,16 +59,18 @@ function wallChoiceProblems(room: Room): FieldProblem[] {
   const seen = new Set<number>();
   (room.useWalls ?? []).forEach((wall, k) => {
     if (wall >= count) {
-      const message = `Wall ${wall} is not in the room: its walls are numbered 0 to ${count - 1}.`;
+      const message = `The room has ${count} wall${count === 1 ? '' : 's'}; put shelves only along those.`;
       problems.push({ path: ['room', 'useWalls', k], message });
     } else if (seen.has(wall)) {
-      problems.push({ path: ['room', 'useWalls', k], message: `Wall ${wall} is listed twice; list it once.` });
+      const message = `Wall "${room.walls[wall]!.name}" is chosen twice for a shelf; choose it once.`;
+      problems.push({ path: ['room', 'useWalls', k], message });
     }
     seen.add(wall);
   });
   if (room.closed === true && count < 4) {
     const message =
-      'A closed room needs at least four walls with square corners; list them all, or set closed to false.';
+      'A room whose last wall meets the first needs at least four walls with square corners; add them all, or ' +
+      'leave the room open.';
     problems.push({ path: ['room', 'closed'], message });
   }
   return problems;
@@ -78,9 +81,10 @@ function openingProblems(shape: RoomShape, ctx: CheckContext): FieldProblem[] {
   if (opening === undefined) return [];
   const at = (field: string, message: string): FieldProblem[] => [{ path: ['room', 'opening', field], message }];
   if (!shape.useWalls.includes(opening.wallIndex)) {
+    const name = shape.walls[opening.wallIndex]?.name ?? 'a wall';
     return at(
       'wallIndex',
-      `The opening is in wall ${opening.wallIndex}, which has no shelf; add it to useWalls or move it.`,
+      `The doorway is in "${name}", which has no shelf; put a shelf along it or move the doorway.`,
     );
   }
   const wall = shape.walls[opening.wallIndex]!;
@@ -89,25 +93,26 @@ function openingProblems(shape: RoomShape, ctx: CheckContext): FieldProblem[] {
   if (end > toMm) {
     return at(
       'offsetMm',
-      `The opening runs past the end of wall "${wall.name}" (${toMm} mm); move it or make it narrower.`,
+      `The doorway runs past the end of wall "${wall.name}" (${len(toMm)}); move it or make it narrower.`,
     );
   }
   if (opening.offsetMm < fromMm) {
     return at(
       'offsetMm',
-      `The opening starts inside the corner shelf; start it at least ${fromMm} mm from the corner.`,
+      `The doorway starts inside the corner shelf; start it at least ${len(fromMm)} from the corner.`,
     );
   }
   for (const left of [opening.offsetMm - fromMm, toMm - end]) {
     if (left > 0 && left < minBoardLengthMm) {
       return at(
         'offsetMm',
-        `The opening leaves ${left} mm of shelf beside it; move it up to the corner or at least ${minBoardLengthMm} mm from it.`,
+        `The doorway leaves ${len(left)} of shelf beside it; move it up to the corner or at least ` +
+          `${len(minBoardLengthMm)} from it.`,
       );
     }
   }
   if (opening.kind === 'lift-out' && opening.widthMm > ctx.sheetLongMm) {
-    return at('widthMm', `A lift-out must be at most ${ctx.sheetLongMm} mm long, the sheet’s length; make it a gap.`);
+    return at('widthMm', `A lift-out must be at most ${len(ctx.sheetLongMm)} long, the sheet’s length; make it a gap.`);
   }
   return [];
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { PLAN_LIMITS } from '../limits';
+import { lengthText } from '../text/lengths';
 
 /*
  * Field builders shared by the plan's schemas. Lengths are numbers of millimetres: the form converts what the user
@@ -7,13 +8,23 @@ import { PLAN_LIMITS } from '../limits';
  * and the fix.
  */
 
-/** A number in a range, with messages that name the field, e.g. "Board length must be at least 300 mm." */
+/**
+ * A number in a range, with messages that name the field, e.g. "Board length must be at least 300 mm." Limits of a
+ * length (unit "mm") are worded when the message is made, in the unit of the plan being read (see text/lengths).
+ */
 export function rangeField(label: string, unit: string, min: number, max: number) {
-  const unitText = unit === '' ? '' : ` ${unit}`;
+  const isLength = unit === 'mm';
+  const limit = (value: number) => (isLength ? lengthText(value) : unit === '' ? `${value}` : `${value} ${unit}`);
+  const what = label.toLowerCase();
   return z
-    .number({ error: `Enter the ${label.toLowerCase()} as a number${unit === '' ? '' : ` of ${unit}`}.` })
-    .min(min, { error: `${label} must be at least ${min}${unitText}.` })
-    .max(max, { error: `${label} must be at most ${max}${unitText}.` });
+    .number({
+      error: () =>
+        isLength
+          ? `Enter the ${what} as a length.`
+          : `Enter the ${what} as a number${unit === '' ? '' : ` of ${unit}`}.`,
+    })
+    .min(min, { error: () => `${label} must be at least ${limit(min)}.` })
+    .max(max, { error: () => `${label} must be at most ${limit(max)}.` });
 }
 
 /** A length in millimetres, rounded to the nearest whole millimetre (the precision of a saw cut) once checked. */

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { DEFAULT_MAX_BOARD_LENGTH_MM, DEFAULT_THIN_SHEET_MM } from '../defaults';
 import { PLAN_LIMITS } from '../limits';
-import { choiceField, nameField, strictGroup, wholeMmField } from './fields';
+import { choiceField, nameField, rangeField, strictGroup, wholeMmField } from './fields';
 
 const { minBoardLengthMm, minBoardWidthMm, maxWallLengthMm, maxWalls, maxBoards } = PLAN_LIMITS;
 
@@ -41,9 +41,9 @@ export const wallSchema = strictGroup('a wall', {
 /** A doorway or other gap along one wall's shelf. */
 export const openingSchema = strictGroup('the opening', {
   wallIndex: z
-    .number({ error: 'Enter the number of the wall the opening is in (0 for the first wall).' })
-    .int({ error: 'The opening’s wall is a whole number (0 for the first wall).' })
-    .min(0, { error: 'The opening’s wall must be 0 or more (0 is the first wall).' })
+    .number({ error: 'Choose the wall the opening is in.' })
+    .int({ error: 'Choose the wall the opening is in.' })
+    .min(0, { error: 'Choose the wall the opening is in.' })
     .describe('Index of the wall the opening is in, 0 for the first; it must be one of useWalls.'),
   offsetMm: wholeMmField('Opening offset', 0, maxWallLengthMm).describe(
     'Distance from the wall’s starting corner (going clockwise) to the near side of the opening, mm.',
@@ -72,7 +72,12 @@ export const roomSchema = strictGroup('the room', {
     'Depth of the shelf out from the wall: the width of each board, mm.',
   ),
   useWalls: z
-    .array(z.number().int({ error: 'A wall number is a whole number.' }).min(0, { error: 'Wall numbers start at 0.' }))
+    .array(
+      z
+        .number({ error: 'Choose the walls to put a shelf on.' })
+        .int({ error: 'Choose the walls to put a shelf on.' })
+        .min(0, { error: 'Choose the walls to put a shelf on.' }),
+    )
     .min(1, { error: 'Choose at least one wall to put a shelf on.' })
     .max(maxWalls, { error: `Choose at most ${maxWalls} walls.` })
     .optional()
@@ -96,7 +101,7 @@ export const secondLevelSchema = strictGroup('the second level', {
     .default('same-footprint')
     .describe('"same-footprint": every lower board has a board above it; "selected": only the boards in boardIds.'),
   boardIds: z
-    .array(z.string({ error: 'A board id is text.' }), { error: 'List the ids of the boards to copy.' })
+    .array(z.string({ error: 'Choose the boards to build over.' }), { error: 'Choose the boards to build over.' })
     .max(maxBoards, { error: `List at most ${maxBoards} boards.` })
     .optional()
     .describe('With which "selected": ids of the lower boards that get a board above them.'),
@@ -108,10 +113,7 @@ export const secondLevelSchema = strictGroup('the second level', {
 /** A shelf low down between each board's legs, for storage; a thinner sheet with no wiring. */
 export const lowerShelfSchema = strictGroup('the lower shelf', {
   heightMm: wholeMmField('Lower shelf height', 50, 2000).describe('Height of the shelf’s top above the floor, mm.'),
-  sheetThicknessMm: z
-    .number({ error: 'Enter the lower shelf’s sheet thickness in millimetres.' })
-    .min(3, { error: 'Lower shelf sheet thickness must be at least 3 mm.' })
-    .max(25, { error: 'Lower shelf sheet thickness must be at most 25 mm.' })
+  sheetThicknessMm: rangeField('Lower shelf sheet thickness', 'mm', 3, 25)
     .default(DEFAULT_THIN_SHEET_MM)
     .describe('Thickness of the shelf’s sheet (same material as the top), mm; default 6.'),
 });
@@ -125,10 +127,7 @@ export const kickboardsSchema = strictGroup('the kickboards', {
   floorFallMm: wholeMmField('Floor fall', 0, 100)
     .default(0)
     .describe('How much lower the floor is at its lowest point along the boards, mm; added to each kickboard.'),
-  sheetThicknessMm: z
-    .number({ error: 'Enter the kickboard sheet thickness in millimetres.' })
-    .min(3, { error: 'Kickboard sheet thickness must be at least 3 mm.' })
-    .max(25, { error: 'Kickboard sheet thickness must be at most 25 mm.' })
+  sheetThicknessMm: rangeField('Kickboard sheet thickness', 'mm', 3, 25)
     .default(DEFAULT_THIN_SHEET_MM)
     .describe('Thickness of the kickboards’ sheet (same material as the top), mm; default 6.'),
 });

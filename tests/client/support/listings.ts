@@ -30,6 +30,7 @@ export function buildModule(overrides: Partial<ModuleDetailsView> = {}): ModuleD
     priceMinor: 18_000,
     handling: { collection: true, delivery: null, courier: null },
     weightKg: 9.5,
+    weightSource: 'entered',
     ...overrides,
   };
 }
@@ -44,6 +45,7 @@ export function buildSearchItem(overrides: Partial<ListingSearchItem> = {}): Lis
     description: 'A through station on one board.',
     currency: 'GBP',
     seller: { id: 3, displayName: 'Hattie Dowel' },
+    sellerRating: { average: null, count: 0 },
     town: { id: 2652002, name: 'Crewe', adminArea: 'England', country: 'GB', lat: 53.1, lon: -2.44 },
     position: { lat: 53.1, lon: -2.44 },
     module: buildModule(),

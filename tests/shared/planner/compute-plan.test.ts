@@ -118,7 +118,8 @@ describe('the two-level room plan', () => {
   it('cuts each kickboard the floor’s fall taller, to scribe down to the floor', () => {
     const kickboards = plan.cuttingList.filter((r) => r.kind === 'kickboard');
     expect(new Set(kickboards.map((r) => r.widthMm))).toEqual(new Set([150 + 12]));
-    expect(plan.warnings.some((w) => w.startsWith('The floor falls up to 12 mm'))).toBe(true);
+    // The example is imperial, so its messages are in feet and inches: 12 mm = 0.47 in → 1/2" (nearest 1/16 in).
+    expect(plan.warnings.some((w) => w.startsWith('The floor falls up to 1/2":'))).toBe(true);
   });
 
   it('joins neighbours with pattern-makers’ dowels, two to a join', () => {

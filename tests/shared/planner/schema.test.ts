@@ -105,9 +105,12 @@ describe('bad input', () => {
 
   it('refuses an opening that leaves a sliver of shelf beside it', () => {
     const room = { ...tenByThirteenTwoLevel.room!, opening: { wallIndex: 3, offsetMm: 700, widthMm: 800 } };
-    const error = planError({ ...tenByThirteenTwoLevel, room });
-    expect(error.fields['room.opening.offsetMm']).toBe(
-      'The opening leaves 100 mm of shelf beside it; move it up to the corner or at least 300 mm from it.',
+    // The example is imperial: 100 mm = 3.94 in → 3 15/16", 300 mm = 11.81 in → 11 13/16" (nearest 1/16 in).
+    expect(planError({ ...tenByThirteenTwoLevel, room }).fields['room.opening.offsetMm']).toBe(
+      'The doorway leaves 3 15/16" of shelf beside it; move it up to the corner or at least 11 13/16" from it.',
+    );
+    expect(planError({ ...tenByThirteenTwoLevel, units: 'metric', room }).fields['room.opening.offsetMm']).toBe(
+      'The doorway leaves 100 mm of shelf beside it; move it up to the corner or at least 300 mm from it.',
     );
   });
 
@@ -122,7 +125,7 @@ describe('bad input', () => {
 
   it('points a part longer than any stock length at the stock lengths', () => {
     const error = planError({ boards: [{ lengthMm: 2400, widthMm: 600 }], construction: { stockLengthsMm: [1800] } });
-    expect(error.fields['construction.stockLengthsMm']).toMatch(/longest stock gives 1800 mm/);
+    expect(error.fields['construction.stockLengthsMm']).toMatch(/longest timber on sale gives 1800 mm/);
   });
 
   it('points a second-level board that does not exist at its place in boardIds', () => {

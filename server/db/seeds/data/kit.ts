@@ -82,6 +82,7 @@ export const courier = (service: 'parcel' | 'pallet', collection = true): Handli
   collection,
   delivery: null,
   courier: service,
+  courierPriceMinor: service === 'parcel' ? 2_400 : 6_800,
 });
 
 /** What differs from one demo module to the next; the rest takes the usual values. */

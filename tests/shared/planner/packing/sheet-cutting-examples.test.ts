@@ -48,7 +48,9 @@ describe('planSheetCutting, worked by hand', () => {
     expect(turned.sheets[0]!.placements[0]).toMatchObject({ width: 1500, height: 300, rotated: true });
 
     expect(() => planSheetCutting({ parts: [{ ...parts[0]!, grain: 'along' }] })).toThrow(PlannerInputError);
-    expect(() => planSheetCutting({ parts, allowRotation: false })).toThrow(/"fascia" \(300 × 1500 mm\) does not fit/);
+    expect(() => planSheetCutting({ parts, allowRotation: false })).toThrow(
+      /"fascia" \(300 mm × 1500 mm\) does not fit/,
+    );
   });
 
   it('names a part too large for every sheet, and plans it on the larger birch sheet', () => {

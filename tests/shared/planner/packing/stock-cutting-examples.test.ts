@@ -140,7 +140,7 @@ describe('planStockCutting refusing input', () => {
     const plan = () => planStockCutting({ parts: [{ id: 'long-rail', length: 6000, quantity: 1 }] });
 
     expect(plan).toThrow(PlannerInputError);
-    expect(plan).toThrow(/"long-rail" is 6000 mm long but the longest stock gives 5400 mm/);
+    expect(plan).toThrow(/"long-rail" is 6000 mm long but the longest timber on sale gives 5400 mm/);
     try {
       plan();
     } catch (error) {
