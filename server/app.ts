@@ -36,6 +36,7 @@ import { orderMovesRouter } from './features/orders/order-moves.router';
 import { orderProblemsRouter } from './features/orders/order-problems.router';
 import { ordersListRouter } from './features/orders/orders-list.router';
 import { payoutsRouter } from './features/orders/payout-accounts.router';
+import { compressApi } from './http/middlewares/compress-api';
 import { csrf, sameOriginOnly } from './http/middlewares/csrf';
 import { apiNotFound, errorHandler } from './http/middlewares/error-handler';
 import { staticClient } from './http/static-client';
@@ -112,6 +113,7 @@ export async function createApp(config: Config): Promise<AppInstance> {
 
   const api = express.Router();
   const health = healthRouter(ctx, () => shuttingDown);
+  api.use(compressApi());
   api.use('/health', health); // before sessions: probes must not create them
   const paymentWebhook = paymentWebhookRouter(ctx);
   api.use('/payments', paymentWebhook); // raw body, no session or CSRF: the provider's signature is its credential
