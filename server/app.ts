@@ -110,6 +110,11 @@ export async function createApp(config: Config): Promise<AppInstance> {
     }),
   );
   app.use(requestLog(logger));
+  app.use((_req, res, next) => {
+    // While draining, ask keep-alive clients to reconnect elsewhere instead of holding this process open.
+    if (shuttingDown) res.setHeader('Connection', 'close');
+    next();
+  });
 
   const api = express.Router();
   const health = healthRouter(ctx, () => shuttingDown);

@@ -12,6 +12,7 @@ const envSchema = z.object({
   PORT: port.default(8080),
   APP_ORIGIN: z.url().default('http://127.0.0.1:8080'),
   TRUST_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
+  SHUTDOWN_DRAIN_MS: z.coerce.number().int().min(0).max(60_000).default(3_000),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   CLIENT_DIST: z.string().default('dist/client'),
 
@@ -73,6 +74,8 @@ export interface Config {
   port: number;
   appOrigin: string;
   trustProxyHops: number;
+  /** After SIGTERM: how long health answers 503 while requests are still served, before the listener closes. */
+  shutdownDrainMs: number;
   logLevel: Env['LOG_LEVEL'];
   clientDist: string;
   db: { host: string; port: number; database: string; user: string; password: string };
@@ -131,6 +134,7 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
     port: e.PORT,
     appOrigin: e.APP_ORIGIN.replace(/\/$/, ''),
     trustProxyHops: e.TRUST_PROXY_HOPS,
+    shutdownDrainMs: e.SHUTDOWN_DRAIN_MS,
     logLevel: e.LOG_LEVEL,
     clientDist: e.CLIENT_DIST,
     db: { host: e.DB_HOST, port: e.DB_PORT, database: e.DB_NAME, user: e.DB_USER, password: e.DB_PASSWORD },

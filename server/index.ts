@@ -16,9 +16,11 @@ async function main(): Promise<void> {
   const stop = async (signal: string) => {
     if (stopping) return;
     stopping = true;
-    instance.ctx.logger.info({ signal }, 'shutting down');
+    instance.ctx.logger.info({ signal, drainMs: config.shutdownDrainMs }, 'shutting down');
+    // Health answers 503 first, so a load balancer stops sending; requests that still arrive are served in full.
     instance.beginShutdown();
-    const forced = setTimeout(() => process.exit(1), 15_000).unref();
+    const forced = setTimeout(() => process.exit(1), config.shutdownDrainMs + 15_000).unref();
+    await new Promise((resolve) => setTimeout(resolve, config.shutdownDrainMs));
     const closed = new Promise<void>((resolve) => server.close(() => resolve()));
     server.closeIdleConnections();
     await closed;

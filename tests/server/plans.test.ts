@@ -25,12 +25,13 @@ describe('POST /api/planner/plan', () => {
     expect(res.body.plan.safety).toBeDefined();
   });
 
-  it('names the field that is wrong', async () => {
+  it('answers 400 naming the field that is wrong', async () => {
     const agent = await browserLikeAgent(app);
 
     const res = await agent.post('/api/planner/plan').send({ boards: [{ lengthMm: 250, widthMm: 200 }] });
 
-    expect(res.status).toBe(422);
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('invalid_plan_input');
     expect(Object.keys(res.body.error.fields)).toEqual(['boards.0.lengthMm']);
     expect(res.body.error.fields['boards.0.lengthMm']).toMatch(/at least/);
   });

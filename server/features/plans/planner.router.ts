@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import type { AppContext } from '../../app-context';
-import { validationFailed } from '../../http/errors';
+import { AppError } from '../../http/errors';
 import { clientIp } from '../../http/request-helpers';
 import { computePlan, PlanInputError } from '../../../shared/planner';
 
@@ -12,7 +12,8 @@ export function plannerRouter(ctx: AppContext): Router {
     try {
       res.json({ plan: computePlan(req.body) });
     } catch (error) {
-      if (error instanceof PlanInputError) throw validationFailed(error.fields, error.message);
+      // The public planner API's published contract: 400 naming each wrong field (the forms' API answers 422).
+      if (error instanceof PlanInputError) throw new AppError(400, 'invalid_plan_input', error.message, error.fields);
       throw error;
     }
   });
