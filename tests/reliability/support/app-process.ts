@@ -16,8 +16,13 @@ export interface AppProcess {
 
 const ROOT = path.resolve(import.meta.dirname, '../../..');
 
-export async function startAppProcess(env: Record<string, string>, timeoutMs = 30_000): Promise<AppProcess> {
-  const port = await closedPort();
+/** `port`: where it listens (a free one unless given, e.g. when a webhook sender must know it in advance). */
+export async function startAppProcess(
+  env: Record<string, string>,
+  timeoutMs = 30_000,
+  port?: number,
+): Promise<AppProcess> {
+  port ??= await closedPort();
   const url = `http://127.0.0.1:${port}`;
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     cwd: ROOT,
