@@ -87,6 +87,19 @@ describe('POST /api/quotes/:id/accept', () => {
     await world.buyer.agent.post(`/api/quotes/${second}/accept`).send({ handover: 'collection' }).expect(409);
   });
 
+  it('opens the request again when the build order lapses unpaid, so another quote can be accepted', async () => {
+    const { first, second } = await twoQuotes();
+    const accepted = await world.buyer.agent
+      .post(`/api/quotes/${first}/accept`)
+      .send({ handover: 'collection' })
+      .expect(201);
+    const orderId = (accepted.body as { orderId: number }).orderId;
+    await world.buyer.agent.post(`/api/orders/${orderId}/give-up`).expect(200);
+    expect((await app.ctx.dataSource.getRepository(Order).findOneByOrFail({ id: orderId })).state).toBe('lapsed');
+
+    await world.buyer.agent.post(`/api/quotes/${second}/accept`).send({ handover: 'collection' }).expect(201);
+  });
+
   it('lets only one of two simultaneous acceptances through', async () => {
     const { first, second } = await twoQuotes();
     const answers = await Promise.all([

@@ -5,6 +5,7 @@ import { enqueueEmail } from '../mail/mail-outbox';
 import { mailTemplates } from '../mail/mail-templates';
 import { moveListing } from '../listings/listing-lifecycle';
 import { Listing } from '../listings/listing.entity';
+import { reopenQuoteAfterLapse } from '../quotes/quote-reopen';
 import { moveOrder, type OrderActor } from './order-lifecycle';
 import type { OrderJob } from './order-jobs';
 import { orderParties } from './order-mail';
@@ -65,6 +66,7 @@ export async function lapseUnpaidOrder(
         { orderId: order.id },
       );
   }
+  if (order.kind === 'build' && order.quoteId !== null) await reopenQuoteAfterLapse(m, order.quoteId);
   if (actor.as === 'system') {
     const parties = await orderParties(m, order, ctx.config.appOrigin);
     await enqueueEmail(
