@@ -58,11 +58,23 @@ const signIn = (page: Page, user: User) => signInThroughPage(page, appUrl, user.
 const UNLABELLED = `(() => {
   const seen = (el) => { const r = el.getBoundingClientRect(); return el.checkVisibility() && r.width > 1 && r.height > 1; };
   const text = (el) => el !== null && el.textContent.trim().length > 0 && seen(el);
-  return [...document.querySelectorAll('main input:not([type=hidden]), main select, main textarea')]
-    .filter((el) => seen(el) || [...(el.labels ?? [])].some(seen))
-    .filter((el) => ![...(el.labels ?? [])].some(text) &&
+  const shown = [...document.querySelectorAll('main input:not([type=hidden]), main select, main textarea')]
+    .filter((el) => seen(el) || [...(el.labels ?? [])].some(seen));
+  return { checked: shown.length, unlabelled: shown.filter((el) => ![...(el.labels ?? [])].some(text) &&
       !(el.getAttribute('aria-labelledby') ?? '').split(' ').some((id) => text(document.getElementById(id))))
-    .map((el) => el.outerHTML.slice(0, 160)); })()`;
+    .map((el) => el.outerHTML.slice(0, 160)) }; })()`;
+
+interface LabelCheck {
+  checked: number;
+  unlabelled: string[];
+}
+
+/** Check the labels of the page's rendered fields, and that there were fields to check. */
+async function expectVisibleLabels(page: Page, path: string): Promise<void> {
+  const found = await page.evaluate<LabelCheck>(UNLABELLED);
+  expect(found.checked, path).toBeGreaterThan(0);
+  expect(found.unlabelled, path).toEqual([]);
+}
 
 /** WCAG 2.2 contrast ratio of two CSS colours (WCAG 2.2, definitions of "contrast ratio" and "relative luminance"). */
 const CONTRAST = `(() => {
@@ -85,7 +97,12 @@ describe('the search page', () => {
     expect(await count(page).getAttribute('aria-live')).toBe('polite');
     expect(await page.getByLabel('Order').inputValue()).toBe('relevance');
     expect(await page.locator('#search-sort option').allInnerTexts()).toEqual(
-      expect.arrayContaining(['Best match for the words', 'Newest first', 'Price, lowest first', 'Price, highest first']),
+      expect.arrayContaining([
+        'Best match for the words',
+        'Newest first',
+        'Price, lowest first',
+        'Price, highest first',
+      ]),
     );
     const legends = await page.locator('aside legend').allInnerTexts();
     for (const fact of ['Scale', 'Length of a board', 'Width of a board', 'How finished', 'Price (£)', 'Distance'])
@@ -196,7 +213,7 @@ describe('forms', () => {
         await visitor.page.goto(`${appUrl}${path}`);
         await visitor.page.locator('main h1').first().waitFor();
         await visitor.page.waitForLoadState('networkidle');
-        expect(await visitor.page.evaluate<string[]>(UNLABELLED), path).toEqual([]);
+        await expectVisibleLabels(visitor.page, path);
       }
     } finally {
       await visitor.close();
@@ -205,9 +222,17 @@ describe('forms', () => {
     await page.goto(`${appUrl}/sell`);
     const length = page.getByLabel('Length', { exact: true });
     await length.waitFor();
-    expect(await page.evaluate<string[]>(UNLABELLED)).toEqual([]);
+    await expectVisibleLabels(page, '/sell');
     const hintIds = (await length.getAttribute('aria-describedby'))!.split(' ');
     expect(await page.locator(`#${hintIds[0]}`).innerText()).toMatch(/\d/);
+
+    // The check itself finds a field named only by its placeholder.
+    await page.evaluate(`document.querySelector('main').append(Object.assign(document.createElement('input'),
+      { id: 'ux-placeholder-only', placeholder: 'Nearest town' }))`);
+    expect((await page.evaluate<LabelCheck>(UNLABELLED)).unlabelled).toEqual([
+      expect.stringContaining('ux-placeholder-only'),
+    ]);
+    await page.evaluate(`document.getElementById('ux-placeholder-only').remove()`);
 
     await page.getByLabel('Title', { exact: true }).fill(`${word} junction`);
     await length.fill('100');
@@ -220,6 +245,7 @@ describe('forms', () => {
     await screenshot(page, 'ux-field-error-desktop');
 
     await page.getByRole('button', { name: 'Save draft' }).click();
+    await page.getByText('Some answers need changing. Each one is explained next to its field.').waitFor();
     expect(new URL(page.url()).pathname).toBe('/sell');
     expect(await page.getByLabel('Title', { exact: true }).inputValue()).toBe(`${word} junction`);
     expect(await length.inputValue()).toBe('100');
@@ -228,6 +254,35 @@ describe('forms', () => {
     await length.press('Tab');
     await expect.poll(() => length.getAttribute('aria-invalid')).toBe(null);
     expect(await error.count()).toBe(0);
+  });
+
+  it('shows the total before the first question and asks a handful of questions, each once (line 11)', async () => {
+    const browser = await openBrowser();
+    try {
+      const { page } = browser;
+      await signIn(page, buyer);
+      await page.goto(`${appUrl}/modules/${listingId}/buy`);
+      const total = page.getByTestId('checkout-total');
+      await total.waitFor();
+      await page.getByRole('radio', { name: /Parcel courier/ }).check();
+      await page.getByLabel('Delivery address', { exact: true }).waitFor();
+      // Beside the questions on a wide screen (checkout.test.ts checks it comes above them on a phone): on the first screen.
+      const box = (await total.boundingBox())!;
+      expect(box.y + box.height).toBeLessThanOrEqual(900);
+      await screenshot(page, 'ux-checkout-desktop');
+      // One question per radio group (by its name) or per other field (by its label); none asked twice.
+      const questions = await page.evaluate<string[]>(`(() => {
+        const fields = [...document.querySelectorAll('main input:not([type=hidden]), main select, main textarea')];
+        const radios = new Set(fields.filter((el) => el.type === 'radio').map((el) => 'group ' + el.name));
+        const others = fields.filter((el) => el.type !== 'radio')
+          .map((el) => [...el.labels].map((l) => l.textContent.trim()).join(' ') || el.id);
+        return [...radios, ...others]; })()`);
+      expect(questions.length).toBeGreaterThan(1);
+      expect(new Set(questions).size).toBe(questions.length);
+      expect(questions.length).toBeLessThanOrEqual(12);
+    } finally {
+      await browser.close();
+    }
   });
 
   it('sign-in takes a pasted address and password and asks no puzzle (line 17)', async () => {

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { BUILD_STAGE_LABELS } from '../../shared/schemas/quotes';
 import type { BuildView } from '../../shared/types/quotes';
 import { waitForMail } from '../support/inbox';
 import { eventually, startPayingApp, type PayingApp } from '../support/paying-app';
@@ -36,7 +37,7 @@ async function pay(orderId: number, state: string): Promise<void> {
 }
 
 describe('a build order from deposit to balance', { timeout: 30_000 }, () => {
-  it('takes the deposit, records the stages, asks for the balance when ready, and holds it once paid', async () => {
+  it('takes the deposit, records the stages (e-mailing the buyer at each), asks for the balance when ready, and holds it once paid', async () => {
     const id = await acceptedOrder();
     const first = await build(world.buyer, id);
     expect(first).toMatchObject({ state: 'awaiting_deposit', viewerRole: 'buyer', nextStages: [] });
@@ -44,6 +45,8 @@ describe('a build order from deposit to balance', { timeout: 30_000 }, () => {
     expect(first.depositMinor + first.balanceMinor).toBe(first.totalMinor);
 
     await pay(id, 'in_build');
+    await waitForMail(world.buyer.user.email, 'Deposit paid:');
+    await waitForMail(world.near.user.email, 'Deposit paid, start the build:');
     expect((await build(world.near, id)).nextStages).toEqual(['materials_bought', 'ready']);
     const noted = await world.near.agent
       .post(`/api/builds/${id}/stages`)
@@ -60,6 +63,8 @@ describe('a build order from deposit to balance', { timeout: 30_000 }, () => {
       'frames_built',
       'ready',
     ]);
+    await waitForMail(world.buyer.user.email, `Build progress: ${BUILD_STAGE_LABELS.materials_bought}`);
+    await waitForMail(world.buyer.user.email, `Build progress: ${BUILD_STAGE_LABELS.frames_built}`);
     await waitForMail(world.buyer.user.email, 'Your boards are built: balance of');
     const due = await build(world.buyer, id);
     expect(due.due).toEqual({ purpose: 'balance', amountMinor: due.balanceMinor });

@@ -333,6 +333,33 @@ export const mailTemplates = {
     ),
 
   /** To a buyer: the builder has finished; the balance is due before hand-over. */
+  depositPaidBuyer: (name: string, title: string, deposit: string, url: string) =>
+    compose(
+      `Deposit paid: ${title}`,
+      name,
+      [
+        `Your deposit of ${deposit} for "${oneLine(title)}" has arrived. Benchwright holds it while the builder works.`,
+        'You will be told at each stage, and asked for the balance when the boards are ready.',
+      ],
+      { url, label: 'See the build' },
+    ),
+  depositPaidBuilder: (name: string, title: string, deposit: string, url: string) =>
+    compose(
+      `Deposit paid, start the build: ${title}`,
+      name,
+      [
+        `The buyer has paid the deposit of ${deposit} for "${oneLine(title)}"; Benchwright holds it until hand-over.`,
+        'Record each stage on the build page as you go; "ready" asks the buyer for the balance.',
+      ],
+      { url, label: 'Open the build' },
+    ),
+  buildStage: (name: string, builderName: string, planName: string, stage: string, url: string) =>
+    compose(
+      `Build progress: ${stage}`,
+      name,
+      [`${oneLine(builderName)} has recorded "${oneLine(stage)}" for "${oneLine(planName)}".`],
+      { url, label: 'See the build' },
+    ),
   buildReady: (name: string, builderName: string, planName: string, balance: string, url: string) =>
     compose(
       `Your boards are built: balance of ${balance} due`,

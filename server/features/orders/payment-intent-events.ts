@@ -74,6 +74,23 @@ async function mailPaid(ctx: AppContext, m: EntityManager, order: Order): Promis
   );
 }
 
+/** A build's deposit arrived: the buyer has their receipt, the builder may start. Links go to the build page. */
+async function mailDepositPaid(ctx: AppContext, m: EntityManager, order: Order): Promise<void> {
+  const parties = await orderParties(m, order, ctx.config.appOrigin);
+  const url = `${ctx.config.appOrigin}/builds/${order.id}`;
+  const deposit = formatMoney(order.depositMinor, order.currency);
+  await enqueueEmail(
+    m,
+    parties.buyer.email,
+    mailTemplates.depositPaidBuyer(parties.buyer.displayName, parties.title, deposit, url),
+  );
+  await enqueueEmail(
+    m,
+    parties.seller.email,
+    mailTemplates.depositPaidBuilder(parties.seller.displayName, parties.title, deposit, url),
+  );
+}
+
 /**
  * Money arrived for an order that no longer expects it (it lapsed, or was paid by another attempt): give it
  * straight back. The refund's idempotency key is made from the intent, so a retry cannot refund twice.
@@ -131,7 +148,8 @@ export async function onIntentSucceeded(ctx: AppContext, m: EntityManager, event
   const move = MOVE_FOR[payment.purpose];
   if (canMoveOrder(order.state, move)) {
     await moveOrder(m, order, move, { as: 'payments', id: null }, null);
-    if (move !== 'payDeposit') await mailPaid(ctx, m, order);
+    if (move === 'payDeposit') await mailDepositPaid(ctx, m, order);
+    else await mailPaid(ctx, m, order);
     return;
   }
   await refundUnexpected(ctx, m, order, intent);

@@ -94,8 +94,8 @@ export async function getBuild(ctx: AppContext, actor: ListingActor, id: number)
 
 /**
  * POST /api/builds/:id/stages: the builder records a stage while building. "Materials bought" and "frames
- * built" are history notes, once each and in that order; "ready" moves the order to wait for the balance and
- * e-mails the buyer.
+ * built" are history notes, once each and in that order; "ready" moves the order to wait for the balance. The
+ * buyer is e-mailed a link at each stage.
  */
 export async function recordStage(ctx: AppContext, actor: ListingActor, id: number, input: BuildStageInput) {
   await ctx.transaction(async (m) => {
@@ -128,6 +128,17 @@ export async function recordStage(ctx: AppContext, actor: ListingActor, id: numb
         `“${BUILD_STAGE_LABELS[input.stage]}” is already recorded or comes later. Record the stages in order: ${BUILD_STAGES.map((s) => BUILD_STAGE_LABELS[s]).join(', ')}.`,
       );
     await noteOrderEvent(m, order, 'stage', by, noteText(input.stage, input.note));
+    const buyer = await m.findOneByOrFail(User, { id: order.buyerId });
+    const quote = await m.findOneByOrFail(Quote, { id: order.quoteId! });
+    const request = await m.findOneByOrFail(QuoteRequest, { id: quote.requestId });
+    const builder = (await builderNames(m, [actor.id])).get(actor.id)!.businessName;
+    const url = `${ctx.config.appOrigin}/builds/${order.id}`;
+    const label = BUILD_STAGE_LABELS[input.stage];
+    await enqueueEmail(
+      m,
+      buyer.email,
+      mailTemplates.buildStage(buyer.displayName, builder, request.planName, label, url),
+    );
   });
   return getBuild(ctx, actor, id);
 }
