@@ -94,6 +94,8 @@ export default defineConfig({
           fileParallelism: false,
           globalSetup: ['tests/support/browser-setup.ts'],
           testTimeout: 60_000,
+          // The photo bucket the browser tests' app serves (tests/support/browser-setup.ts), so their data shows.
+          env: { TEST_S3_BUCKET: 'benchwright-photos-browser' }, // BROWSER_PHOTO_BUCKET in tests/support/test-env.ts
         },
       },
     ],

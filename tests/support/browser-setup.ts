@@ -6,7 +6,7 @@ import { createApp } from '../../server/app';
 import type { Config } from '../../server/config';
 import { createDataSource } from '../../server/db/data-source';
 import { createStorage } from '../../server/lib/storage';
-import { testConfig } from './test-env';
+import { BROWSER_PHOTO_BUCKET, testConfig } from './test-env';
 
 /**
  * Before the browser tests: build the client, bring the test database up to date, and serve the
@@ -16,7 +16,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
   await build({ logLevel: 'warn', configFile: 'vite.config.ts' });
   const base = testConfig({ clientDist: 'dist/client' });
   // Its own photo bucket, so server tests that compare the whole bucket before and after never see its uploads.
-  const config = { ...base, s3: { ...base.s3, bucket: `${base.s3.bucket}-browser` } };
+  const config = { ...base, s3: { ...base.s3, bucket: BROWSER_PHOTO_BUCKET } };
   await createBucket(config.s3);
   const dataSource = createDataSource(config.db);
   await dataSource.initialize();
