@@ -9,24 +9,4 @@ TSX=node_modules/.bin/tsx
 if [ -n "${LIGHTHOUSE_URL:-}" ]; then
   exec "$TSX" tests/bench/lighthouse.ts
 fi
-
-RECORD=$(mktemp "${TMPDIR:-/tmp}/benchwright-lighthouse.XXXXXX")
-cleanup() {
-  local status=$?
-  trap - EXIT INT TERM
-  "$TSX" infra-local/services.ts down --profile test --only "$RECORD" || true
-  rm -f "$RECORD"
-  exit "$status"
-}
-trap cleanup EXIT
-trap 'exit 130' INT
-trap 'exit 143' TERM
-
-"$TSX" infra-local/services.ts up --profile test --record "$RECORD"
-set -a
-# shellcheck source=/dev/null
-. .local/test/services.env
-set +a
-export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
-
-"$TSX" tests/bench/lighthouse.ts
+exec infra-local/with-test-services.sh "$TSX" tests/bench/lighthouse.ts
